@@ -62,7 +62,16 @@ export interface Scenario {
   name: string;
   description?: string;
   observer: { height_m: number; aperture_m?: number };
-  target: { range_m: number; height_m: number; shape?: string };
+  target: {
+    range_m: number;
+    height_m: number;
+    /** Silhouette for the simulated view: vessel, tower, cliff, ice, pole or custom. */
+    shape?: string;
+    /** Custom silhouette as [width_m, height_m] pairs from the left edge (shape "custom"). */
+    outline_m?: [number, number][];
+    /** Height of a light on the target, m (sighting range of lights). */
+    light_height_m?: number;
+  };
   atmosphere: AtmosphereSpec;
   optics: OpticsSpec;
   earth: { radius_m: number };
