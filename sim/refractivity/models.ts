@@ -50,32 +50,21 @@ const COLUMN_TEMPERATURE_K: Interval = [180, 340];
  */
 const COLUMN_PRESSURE_PA: Interval = [0, 120_000];
 
+/** Ranges of an optical model (wavelength, column temperature and pressure, CO2). */
+function opticalValidity(source: string): IndexModelValidity {
+  return { wavelength_um: [0.3, 1.7], temperature_K: COLUMN_TEMPERATURE_K, pressure_Pa: COLUMN_PRESSURE_PA, co2_ppm: [0, 2000], source };
+}
+
 /**
  * Ranges per model that the scenario loader checks (with InputRangeError naming the field).
  * Published ranges are in `source`; where Loomline accepts more, the reason is given above.
  */
 export const INDEX_MODEL_VALIDITY: Readonly<Record<IndexModelName, IndexModelValidity>> = Object.freeze({
-  ciddor: {
-    wavelength_um: [0.3, 1.7],
-    temperature_K: COLUMN_TEMPERATURE_K,
-    pressure_Pa: COLUMN_PRESSURE_PA,
-    co2_ppm: [0, 2000],
-    source: 'Ciddor 1996 (Appl. Opt. 35, 1566): 0.3–1.69 µm, −40..100 °C, 80–120 kPa, 0–2000 ppm CO2',
-  },
-  edlen: {
-    wavelength_um: [0.3, 1.7],
-    temperature_K: COLUMN_TEMPERATURE_K,
-    pressure_Pa: COLUMN_PRESSURE_PA,
-    co2_ppm: [0, 2000],
-    source: 'Edlén 1966 (Metrologia 2, 71): fitted to laboratory air near 15–20 °C and 1 atm; wavelengths as for Ciddor',
-  },
-  'birch-downs': {
-    wavelength_um: [0.3, 1.7],
-    temperature_K: COLUMN_TEMPERATURE_K,
-    pressure_Pa: COLUMN_PRESSURE_PA,
-    co2_ppm: [0, 2000],
-    source: 'Birch & Downs 1993/1994 (Metrologia 30, 155; 31, 315) as modified by NIST EMT; wavelengths as for Ciddor',
-  },
+  ciddor: opticalValidity('Ciddor 1996 (Appl. Opt. 35, 1566): 0.3–1.69 µm, −40..100 °C, 80–120 kPa, 0–2000 ppm CO2'),
+  edlen: opticalValidity('Edlén 1966 (Metrologia 2, 71): fitted to laboratory air near 15–20 °C and 1 atm; wavelengths as for Ciddor'),
+  'birch-downs': opticalValidity(
+    'Birch & Downs 1993/1994 (Metrologia 30, 155; 31, 315) as modified by NIST EMT; wavelengths as for Ciddor',
+  ),
   radio: {
     wavelength_um: null,
     temperature_K: COLUMN_TEMPERATURE_K,
