@@ -10,7 +10,7 @@ import {
 import { vapourPressureFromRelativeHumidity_Pa } from '../../sim/refractivity/water-vapour.js';
 import { expectClose } from '../support/close.js';
 import { loadFixture } from './fixture.js';
-import { nistTable } from './nist-table.js';
+import { dispersionTable, nistTable } from './reference-tables.js';
 
 /** n − 1, dimensionless. NIST prints n to 9 decimals; REFERENCES.md §0 row A suggests ±2e-9. */
 const NIST_TOL = 2e-9;
@@ -78,16 +78,11 @@ describe('Ciddor 1996 building blocks', () => {
 
   it('reproduces the dispersion of dry standard air and of standard water vapour from 300 to 1550 nm', () => {
     // REFERENCES.md §1.7, Ciddor columns: independent computation from Ciddor 1996 Eqs. (1) and (3).
-    const rows = loadFixture(
-      'standard-air-dispersion.csv',
-      ['wavelength_nm', 'ciddor_air_1e8', 'ciddor_vapour_1e8', 'edlen_air_1e8', 'birch_downs_air_1e8'],
-      10,
-    );
-    const wavelengths_um = rows.map((r) => r.wavelength_nm / 1000);
-    expectClose(wavelengths_um.map((w) => ciddorStandardAirRefractivity(w) * 1e8), rows.map((r) => r.ciddor_air_1e8), {
+    const rows = dispersionTable();
+    expectClose(rows.map((r) => ciddorStandardAirRefractivity(r.wavelength_um) * 1e8), rows.map((r) => r.ciddorAir), {
       abs: DISPERSION_TOL_1E8,
     });
-    expectClose(wavelengths_um.map((w) => ciddorStandardVapourRefractivity(w) * 1e8), rows.map((r) => r.ciddor_vapour_1e8), {
+    expectClose(rows.map((r) => ciddorStandardVapourRefractivity(r.wavelength_um) * 1e8), rows.map((r) => r.ciddorVapour), {
       abs: DISPERSION_TOL_1E8,
     });
   });

@@ -1,7 +1,12 @@
 /**
- * The NIST EMT 14-row comparison table (REFERENCES.md §1.3) as air states, shared by the Ciddor and
- * modified-Edlén tests. Humidity follows NIST (REFERENCES.md §1.2): p_v = RH · svp_IAPWS(T); the
+ * Reference tables shared by several refractivity tests.
+ *
+ * nistTable: the NIST EMT 14-row comparison table (REFERENCES.md §1.3) as air states, for the
+ * Ciddor and modified-Edlén tests. Humidity follows NIST (REFERENCES.md §1.2): p_v = RH · svp_IAPWS(T); the
  * enhancement factor enters only Ciddor's mole fraction, inside the model.
+ *
+ * dispersionTable: (n − 1)×10⁸ of the standard airs against wavelength (REFERENCES.md §1.7,
+ * independent computation), for the Ciddor, Edlén and Birch & Downs tests.
  */
 import { CELSIUS_OFFSET_K } from '../../sim/constants.js';
 import type { AirState, OpticalOptions } from '../../sim/refractivity/types.js';
@@ -37,4 +42,16 @@ export function nistTable(): NistRow[] {
       edlen: row.n_edlen - 1,
     };
   });
+}
+
+/** REFERENCES.md §1.7 rows: wavelength in µm and (n − 1)×10⁸ per model's standard air. */
+export function dispersionTable(): { wavelength_um: number; ciddorAir: number; ciddorVapour: number; edlenAir: number; birchDownsAir: number }[] {
+  const columns = ['wavelength_nm', 'ciddor_air_1e8', 'ciddor_vapour_1e8', 'edlen_air_1e8', 'birch_downs_air_1e8'] as const;
+  return loadFixture('standard-air-dispersion.csv', columns, 10).map((r) => ({
+    wavelength_um: r.wavelength_nm / 1000,
+    ciddorAir: r.ciddor_air_1e8,
+    ciddorVapour: r.ciddor_vapour_1e8,
+    edlenAir: r.edlen_air_1e8,
+    birchDownsAir: r.birch_downs_air_1e8,
+  }));
 }
