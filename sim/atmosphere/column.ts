@@ -10,6 +10,11 @@ export interface AirColumn {
   temperatureGradient_K_per_m(z_m: number, side: -1 | 1): number;
   /** Total pressure at z (hydrostatic from the surface pressure), Pa. */
   pressure_Pa(z_m: number): number;
+  /**
+   * dp/dz at z, Pa/m, consistent with pressure_Pa (hydrostatic: −p·g(z)·M/(R·T)). Continuous, so
+   * no side. The index table uses it for the pressure term of dn/dz.
+   */
+  pressureGradient_Pa_per_m(z_m: number): number;
   /** Water-vapour partial pressure at z, Pa. */
   vapour_pressure_Pa(z_m: number): number;
   /** d(vapour pressure)/dz from below (−1) or above (+1), Pa/m. */
