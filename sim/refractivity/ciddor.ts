@@ -123,7 +123,8 @@ export function ciddorStandardVapourRefractivity(wavelength_um: number): number 
  * @param optics wavelength_um (vacuum, 0.3..1.7 µm) and co2_ppm (0..2000 ppm).
  * @returns a function of AirState (temperature_K, pressure_Pa, vapour_pressure_Pa) giving n − 1.
  * Accuracy: reproduces the NIST EMT Ciddor table (REFERENCES.md §1.3) within 2e-9 with NIST's
- *   saturation vapour pressure; Ciddor states a few parts in 10⁸ over his range.
+ *   saturation vapour pressure; Ciddor states an uncertainty of a few parts in 10⁸ over his range
+ *   (from memory).
  * Validity (Ciddor 1996, as transcribed in REFERENCES.md §1.1): λ 0.3–1.69 µm, −40..100 °C,
  *   80–120 kPa, x_c 0–2000 ppm. Lower pressures reduce to the ideal-gas limit (Z → 1).
  */

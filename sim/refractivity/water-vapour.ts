@@ -32,9 +32,9 @@ const ENH_GAMMA = 5.6e-7;
  * svp = exp(A T² + B T + C + D/T), with A = 1.2378847e-5 K⁻², B = −1.9121316e-2 K⁻¹,
  * C = 33.93711047, D = −6.3431645e3 K.
  *
- * @param temperature_K absolute temperature, K. Intended range 273.15..373.15 K (0..100 °C, the
- *   range over which Ciddor 1996 applies his equations); below 273.15 K it gives the pressure over
- *   supercooled water, not over ice (use saturationVapourPressureIapws_Pa for ice).
+ * @param temperature_K absolute temperature, K. Intended range 273.15..373.15 K (liquid water up to
+ *   100 °C, the top of Ciddor's range); below 273.15 K it gives the pressure over supercooled water,
+ *   not over ice (use saturationVapourPressureIapws_Pa for ice). Total and finite for T > 0.
  * @returns saturation vapour pressure, Pa.
  * Accuracy: within 0.003 % of IAPWS-IF97 at 20 °C (2339.163 vs 2339.215 Pa, REFERENCES.md §1.2);
  *   the difference changes n − 1 by less than 1e-10.
@@ -121,7 +121,8 @@ const ICE_A2 = 34.7078238;
  * @param temperature_K absolute temperature, K; IF97 validity 273.15..647.096 K.
  * @returns saturation vapour pressure, Pa (2339.215 Pa at 20 °C, REFERENCES.md §1.2 [computed]).
  * Reference: IAPWS Industrial Formulation 1997 (IF97), saturation-pressure equation (equation
- *   number from memory: Eq. 30); as used in J. A. Stone and J. H. Zimmerman, "Index of Refraction of Air", NIST Engineering Metrology Toolbox, Appendix A.
+ *   number from memory: Eq. 30); as used in J. A. Stone and J. H. Zimmerman, "Index of Refraction
+ *   of Air", NIST Engineering Metrology Toolbox, Appendix A.
  */
 export function saturationVapourPressureOverWaterIapws_Pa(temperature_K: number): number {
   const omega = temperature_K + IF97_K9 / (temperature_K - IF97_K10);
