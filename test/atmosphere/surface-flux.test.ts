@@ -1,10 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { CELSIUS_OFFSET_K, RAD_PER_DEG } from '../../sim/constants.js';
+import { CELSIUS_OFFSET_K } from '../../sim/constants.js';
 import { InputRangeError } from '../../sim/errors.js';
 import { computeBulkFlux, VON_KARMAN, type FluxResult } from '../../sim/atmosphere/surface-flux.js';
 import type { BulkFluxInput } from '../../sim/atmosphere/surface-flux-input.js';
 import { saturationVapourPressureBuck_Pa } from '../../sim/atmosphere/surface-thermo.js';
 import { expectClose } from '../support/close.js';
+import { COARE_ROW1, COARE_ROW58, section75Case } from './surface-fixtures.js';
 
 const K = CELSIUS_OFFSET_K;
 
@@ -16,42 +17,8 @@ const COARE_PUBLISHED_REL = 0.01;
  */
 const REGRESSION_REL = 1e-3;
 
-/** Row 1 of NOAA-PSL COARE-algorithm Python/COARE3.5/test_35_data.txt (REFERENCES.md §7.4). */
-const ROW1: BulkFluxInput = {
-  wind_speed_m_s: 4.7,
-  wind_height_m: 16,
-  air_temperature_K: 27.7 + K,
-  air_temperature_height_m: 16,
-  relative_humidity: 0.7521,
-  surface_pressure_Pa: 100_800,
-  sea_temperature_K: 29.15 + K,
-  cool_skin: true,
-  shortwave_down_W_per_m2: 0,
-  longwave_down_W_per_m2: 428,
-  latitude_rad: -1.73 * RAD_PER_DEG,
-  boundary_layer_height_m: 600,
-};
 
-/** Row 58 of the same file: u = 3.1, ts = 29.12, Rs = 2, Rl = 406 (REFERENCES.md §7.4). */
-const ROW58: BulkFluxInput = { ...ROW1, wind_speed_m_s: 3.1, sea_temperature_K: 29.12 + K, shortwave_down_W_per_m2: 2, longwave_down_W_per_m2: 406 };
 
-/** Common inputs of REFERENCES.md §7.5 (skin temperature given, jcool = 0, lat 45°). */
-function section75(sea_C: number, wind_m_s = 5): BulkFluxInput {
-  return {
-    wind_speed_m_s: wind_m_s,
-    wind_height_m: 10,
-    air_temperature_K: 15 + K,
-    air_temperature_height_m: 10,
-    relative_humidity: 0.8,
-    surface_pressure_Pa: 101_300,
-    sea_temperature_K: sea_C + K,
-    cool_skin: false,
-    shortwave_down_W_per_m2: 0,
-    longwave_down_W_per_m2: 370,
-    latitude_rad: 45 * RAD_PER_DEG,
-    boundary_layer_height_m: 600,
-  };
-}
 
 function scales(r: FluxResult) {
   return { usr: r.friction_velocity_m_s, tsr: r.temperature_scale_K, L: r.obukhov_length_m };
@@ -59,12 +26,12 @@ function scales(r: FluxResult) {
 
 describe('COARE 3.5 published test data (test_35_data.txt / test_35_output_py_082020.txt, REFERENCES.md §7.4)', () => {
   it('row 1: u*, θ* and L within 1 % of 0.151101 m/s, −0.0401937 K and −18.9750 m, with the cool skin', () => {
-    const r = computeBulkFlux(ROW1);
+    const r = computeBulkFlux(COARE_ROW1);
     expect(r.converged).toBe(true);
     expectClose(scales(r), { usr: 0.151101, tsr: -0.0401937, L: -18.975 }, { rel: COARE_PUBLISHED_REL });
   });
   it('row 1: q*, ζ, fluxes, z_ot and the cool-skin depression within 1 % of the published output', () => {
-    const r = computeBulkFlux(ROW1);
+    const r = computeBulkFlux(COARE_ROW1);
     expectClose(
       {
         qsr_g_per_kg: r.humidity_scale * 1000,
@@ -80,7 +47,7 @@ describe('COARE 3.5 published test data (test_35_data.txt / test_35_output_py_08
     expectClose(r.skin_temperature_K, 29.15 + K - 0.31092, { abs: 0.01 * 0.31092 });
   });
   it('row 58: u*, θ*, L, ζ and the cool-skin depression within 1 % of 0.103621, −0.0388925, −8.82782, −1.81245, 0.369429', () => {
-    const r = computeBulkFlux(ROW58);
+    const r = computeBulkFlux(COARE_ROW58);
     expectClose(
       { ...scales(r), zet: r.stability_parameter, dter: r.cool_skin_K },
       { usr: 0.103621, tsr: -0.0388925, L: -8.82782, zet: -1.81245, dter: 0.369429 },
@@ -91,7 +58,7 @@ describe('COARE 3.5 published test data (test_35_data.txt / test_35_output_py_08
 
 describe('COARE 3.5 cases of REFERENCES.md §7.5 (independent computation with the published reference code; regression)', () => {
   it('unstable case (sea 20 °C, air 15 °C): u* 0.17406, θ* −0.214619, L −8.587, ζ −1.16458, z_ot 1.4855e-4, H 45.72 W/m²', () => {
-    const r = computeBulkFlux(section75(20));
+    const r = computeBulkFlux(section75Case(20));
     expectClose(
       { ...scales(r), zet: r.stability_parameter, zot: r.roughness_heat_m, hsb: r.sensible_heat_flux_W_per_m2 },
       { usr: 0.17406, tsr: -0.214619, L: -8.587, zet: -1.16458, zot: 1.4855e-4, hsb: 45.72 },
@@ -99,7 +66,7 @@ describe('COARE 3.5 cases of REFERENCES.md §7.5 (independent computation with t
     );
   });
   it('stable case (sea 10 °C, air 15 °C): u* 0.10207, θ* 0.115909, L 6.383, ζ 1.56672, z_ot 1.6e-4, H −14.48 W/m²', () => {
-    const r = computeBulkFlux(section75(10));
+    const r = computeBulkFlux(section75Case(10));
     expectClose(
       { ...scales(r), zet: r.stability_parameter, zot: r.roughness_heat_m, hsb: r.sensible_heat_flux_W_per_m2 },
       { usr: 0.10207, tsr: 0.115909, L: 6.383, zet: 1.56672, zot: 1.6e-4, hsb: -14.48 },
@@ -107,7 +74,7 @@ describe('COARE 3.5 cases of REFERENCES.md §7.5 (independent computation with t
     );
   });
   it('near-neutral case (sea 15.2 °C, 8 m/s): u* 0.27300, θ* −0.003375, L −358.07, z_ot 4.6762e-5', () => {
-    const r = computeBulkFlux(section75(15.2, 8));
+    const r = computeBulkFlux(section75Case(15.2, 8));
     // ζ is printed as −0.0279 (3 digits): checked at 2e-3 relative, half a unit of its last digit.
     expectClose(r.stability_parameter, -0.0279, { abs: 0.5e-4 });
     expectClose({ ...scales(r), zot: r.roughness_heat_m }, { usr: 0.273, tsr: -0.003375, L: -358.07, zot: 4.6762e-5 }, { rel: REGRESSION_REL });
@@ -121,14 +88,14 @@ describe('bulk flux iteration: physical properties', () => {
     const sea_K = 12 + K;
     const air_K = sea_K - 0.0098 * zt;
     const rh = (0.98 * saturationVapourPressureBuck_Pa(sea_K, 101_325)) / saturationVapourPressureBuck_Pa(air_K, 101_325);
-    const r = computeBulkFlux({ ...section75(12, 7), air_temperature_K: air_K, relative_humidity: rh });
+    const r = computeBulkFlux({ ...section75Case(12, 7), air_temperature_K: air_K, relative_humidity: rh });
     expect(Math.abs(r.stability_parameter)).toBeLessThan(1e-9);
     const neutral = (VON_KARMAN * Math.hypot(7, r.gustiness_m_s)) / Math.log(10 / r.roughness_m);
     expectClose(r.friction_velocity_m_s, neutral, { rel: 1e-9 });
   });
   it('gives a downward heat flux and positive L for warm air over cold water, and the opposite for cold air over warm water', () => {
-    const stable = computeBulkFlux(section75(8));
-    const unstable = computeBulkFlux(section75(22));
+    const stable = computeBulkFlux(section75Case(8));
+    const unstable = computeBulkFlux(section75Case(22));
     expect(stable.temperature_scale_K).toBeGreaterThan(0);
     expect(stable.obukhov_length_m).toBeGreaterThan(0);
     expect(stable.sensible_heat_flux_W_per_m2).toBeLessThan(0);
@@ -137,19 +104,19 @@ describe('bulk flux iteration: physical properties', () => {
     expect(unstable.sensible_heat_flux_W_per_m2).toBeGreaterThan(0);
   });
   it('converges in calm air (wind 0 m/s) on gustiness alone', () => {
-    const r = computeBulkFlux(section75(20, 0));
+    const r = computeBulkFlux(section75Case(20, 0));
     expect(r.converged).toBe(true);
     expect(r.friction_velocity_m_s).toBeGreaterThan(0);
     expect(r.gustiness_m_s).toBeGreaterThan(0.2);
   });
   it('flags a very stable first guess (z/L > 50) and keeps the first-pass solution as the reference code does', () => {
-    const r = computeBulkFlux({ ...section75(0, 0.5), air_temperature_K: 20 + K });
+    const r = computeBulkFlux({ ...section75Case(0, 0.5), air_temperature_K: 20 + K });
     expect(r.very_stable).toBe(true);
     expect(r.converged).toBe(false);
     expect(Number.isFinite(r.obukhov_length_m)).toBe(true);
   });
   it('leaves the skin at the given sea temperature without the cool skin', () => {
-    const r = computeBulkFlux(section75(20));
+    const r = computeBulkFlux(section75Case(20));
     expect(r.skin_temperature_K).toBe(20 + K);
     expect(r.cool_skin_K).toBe(0);
   });
@@ -168,7 +135,7 @@ describe('bulk flux iteration: impossible input', () => {
   ];
   for (const [what, patch, message] of cases) {
     it(`rejects ${what} with an InputRangeError naming the field and range`, () => {
-      const call = () => computeBulkFlux({ ...section75(15), ...patch });
+      const call = () => computeBulkFlux({ ...section75Case(15), ...patch });
       expect(call).toThrow(InputRangeError);
       expect(call).toThrow(message);
     });

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { CELSIUS_OFFSET_K, RAD_PER_DEG } from '../../sim/constants.js';
+import { CELSIUS_OFFSET_K } from '../../sim/constants.js';
 import { computeBulkFlux, VON_KARMAN, type FluxResult } from '../../sim/atmosphere/surface-flux.js';
-import type { BulkFluxInput } from '../../sim/atmosphere/surface-flux-input.js';
 import {
   STABLE_BLEND_ZETA,
   blendingHeight_m,
@@ -10,6 +9,7 @@ import {
 } from '../../sim/atmosphere/surface-profile.js';
 import { psiHeatCoareDerivative } from '../../sim/atmosphere/surface-stability.js';
 import { expectClose } from '../support/close.js';
+import { COARE_ROW1, section75Case } from './surface-fixtures.js';
 
 const K = CELSIUS_OFFSET_K;
 /** Tables printed with 4 decimals in °C: half a unit of the last digit, K. */
@@ -21,20 +21,6 @@ const TABLE_4DP_ABS_K = 0.5e-4;
 const OWN_FLUX_ABS_K = 1e-3;
 /** Evaluation of closed-form expressions in double precision, K. */
 const ROUNDING_ABS_K = 1e-9;
-
-const ROW1: BulkFluxInput = {
-  wind_speed_m_s: 4.7,
-  wind_height_m: 16,
-  air_temperature_K: 27.7 + K,
-  air_temperature_height_m: 16,
-  relative_humidity: 0.7521,
-  surface_pressure_Pa: 100_800,
-  sea_temperature_K: 29.15 + K,
-  cool_skin: true,
-  shortwave_down_W_per_m2: 0,
-  longwave_down_W_per_m2: 428,
-  latitude_rad: -1.73 * RAD_PER_DEG,
-};
 
 /** A FluxResult holding only what the profile reads; the rest is irrelevant to it. */
 function scalesOnly(tsr: number, L: number, zot: number, skin_K: number, qsr = 0, qs = 0.01): FluxResult {
@@ -60,22 +46,6 @@ function scalesOnly(tsr: number, L: number, zot: number, skin_K: number, qsr = 0
   };
 }
 
-function section75(sea_C: number): BulkFluxInput {
-  return {
-    wind_speed_m_s: 5,
-    wind_height_m: 10,
-    air_temperature_K: 15 + K,
-    air_temperature_height_m: 10,
-    relative_humidity: 0.8,
-    surface_pressure_Pa: 101_300,
-    sea_temperature_K: sea_C + K,
-    cool_skin: false,
-    shortwave_down_W_per_m2: 0,
-    longwave_down_W_per_m2: 370,
-    latitude_rad: 45 * RAD_PER_DEG,
-  };
-}
-
 const celsius = (profile: { temperature_K(z: number): number }, heights: number[]) => heights.map((z) => profile.temperature_K(z) - K);
 
 describe('surface-layer temperature of COARE 3.5 test row 1 (REFERENCES.md §7.4, independent computation)', () => {
@@ -89,7 +59,7 @@ describe('surface-layer temperature of COARE 3.5 test row 1 (REFERENCES.md §7.4
     expectClose(celsius(profile, heights), want, { abs: TABLE_4DP_ABS_K });
   });
   it('matches the tabulated T(z) within 1 mK when the scales come from our own iteration', () => {
-    const profile = surfaceLayerProfile(computeBulkFlux(ROW1));
+    const profile = surfaceLayerProfile(computeBulkFlux(COARE_ROW1));
     expectClose(celsius(profile, heights), want, { abs: OWN_FLUX_ABS_K });
   });
 });
@@ -100,11 +70,11 @@ describe('surface-layer temperature of the REFERENCES.md §7.5 cases (independen
   // 10-pass, scales; we measure at most 1e-4 K).
   it('reproduces the unstable (inferior-mirage type) profile, sea 20 °C under air 15 °C', () => {
     const want = [17.746, 16.5491, 15.8193, 15.5666, 15.3594, 15.1461, 15.0, 14.8171];
-    expectClose(celsius(surfaceLayerProfile(computeBulkFlux(section75(20))), heights), want, { abs: TABLE_4DP_ABS_K * 2 });
+    expectClose(celsius(surfaceLayerProfile(computeBulkFlux(section75Case(20))), heights), want, { abs: TABLE_4DP_ABS_K * 2 });
   });
   it('reproduces the stable (superior-mirage type) profile, sea 10 °C under air 15 °C', () => {
     const want = [11.2017, 11.8885, 12.4406, 12.7466, 13.1515, 13.9825, 15.0, 16.5292];
-    expectClose(celsius(surfaceLayerProfile(computeBulkFlux(section75(10))), heights), want, { abs: TABLE_4DP_ABS_K * 2 });
+    expectClose(celsius(surfaceLayerProfile(computeBulkFlux(section75Case(10))), heights), want, { abs: TABLE_4DP_ABS_K * 2 });
   });
 });
 
@@ -119,7 +89,7 @@ describe('surface-layer profile: identities and properties', () => {
     }
   });
   it('passes exactly through the observed air temperature and humidity at the sensor height', () => {
-    for (const input of [ROW1, section75(20), section75(10)]) {
+    for (const input of [COARE_ROW1, section75Case(20), section75Case(10)]) {
       const flux = computeBulkFlux(input);
       const profile = surfaceLayerProfile(flux);
       const z = input.air_temperature_height_m;
@@ -128,7 +98,7 @@ describe('surface-layer profile: identities and properties', () => {
     }
   });
   it('gives warm air over cold water a positive gradient that weakens with height up to z/L = 6.35', () => {
-    const flux = computeBulkFlux(section75(10));
+    const flux = computeBulkFlux(section75Case(10));
     const profile = surfaceLayerProfile(flux);
     const top = STABLE_BLEND_ZETA * flux.obukhov_length_m;
     let previous = Infinity;
@@ -140,7 +110,7 @@ describe('surface-layer profile: identities and properties', () => {
     }
   });
   it('gives cold air over warm water a negative gradient whose size weakens with height towards the adiabat', () => {
-    const profile = surfaceLayerProfile(computeBulkFlux(section75(20)));
+    const profile = surfaceLayerProfile(computeBulkFlux(section75Case(20)));
     let previous = -Infinity;
     for (let z = 3e-4; z < 60; z *= 1.2) {
       const g = profile.temperatureGradient_K_per_m(z, 1);
@@ -150,7 +120,7 @@ describe('surface-layer profile: identities and properties', () => {
     }
   });
   it('has analytic gradients equal to central differences of T and q', () => {
-    const profile = surfaceLayerProfile(computeBulkFlux(section75(10)));
+    const profile = surfaceLayerProfile(computeBulkFlux(section75Case(10)));
     for (const z of [0.001, 0.05, 1, 10, 35]) {
       const h = z * 1e-5;
       const dT = (profile.temperature_K(z + h) - profile.temperature_K(z - h)) / (2 * h);
@@ -161,7 +131,7 @@ describe('surface-layer profile: identities and properties', () => {
     }
   });
   it('holds T and q constant below the roughness length z_ot', () => {
-    const flux = computeBulkFlux(section75(20));
+    const flux = computeBulkFlux(section75Case(20));
     const profile = surfaceLayerProfile(flux);
     const zot = flux.roughness_heat_m;
     expect(profile.temperature_K(0)).toBe(profile.temperature_K(zot));
