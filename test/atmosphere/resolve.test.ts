@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { resolveAirColumn } from '../../sim/atmosphere/resolve.js';
+import { HUMIDITY_TOP_M, MAX_VAPOUR_MOLE_FRACTION, resolveAirColumn } from '../../sim/atmosphere/resolve.js';
 import { US1976_HYDROSTATIC_K_PER_M, US1976_KINKS_M, geometricHeight_m, us1976Pressure_Pa } from '../../sim/atmosphere/us1976.js';
 import { HYDROSTATIC_K_PER_M } from '../../sim/constants.js';
 import { InputRangeError } from '../../sim/errors.js';
@@ -69,6 +69,32 @@ describe('resolving a layered profile', () => {
     const above = column.vapourGradient_Pa_per_m(30, 1);
     expect(below).toBeGreaterThan(0);
     expect(above).toBeLessThan(0);
+  });
+
+  it('holds the vapour mole fraction above the tropopause, so e stays far below p at the warm stratopause', () => {
+    const column = resolveAirColumn({ ...standard, relative_humidity: 1 });
+    const zh = HUMIDITY_TOP_M;
+    expect(column.kinks_m).toContain(zh);
+    const fraction = column.vapour_pressure_Pa(zh) / column.pressure_Pa(zh);
+    for (const z of [20_000, 47_500, 80_000]) {
+      expectClose(column.vapour_pressure_Pa(z) / column.pressure_Pa(z), fraction, { rel: 1e-14 });
+    }
+    // Constant relative humidity would give e = svp(270.65 K) ≈ 509 Pa against p ≈ 111 Pa at 47 km′.
+    expect(fraction).toBeLessThan(1e-3);
+    // One-sided gradients at the humidity top: from svp(T) below, from p above.
+    const below = column.vapourGradient_Pa_per_m(zh, -1);
+    const above = column.vapourGradient_Pa_per_m(zh, 1);
+    expectClose(above, fraction * column.pressureGradient_Pa_per_m(zh), { rel: 1e-14 });
+    expect(Math.abs(below / above)).toBeGreaterThan(2);
+  });
+
+  it('lowers the humidity top where saturated air would exceed a vapour mole fraction of 0.2', () => {
+    // 330 K saturated at the surface: svp ≈ 17 kPa; p falls faster than svp under a +0.005 K/m lapse.
+    const hot = resolveAirColumn({ ...channel, relative_humidity: 1, nodes: [{ height_m: 0, temperature_K: 330 }], above: { kind: 'lapse', lapse_K_per_m: 0.005 } });
+    expect(hot.kinks_m[0]).toBeLessThan(HUMIDITY_TOP_M);
+    for (const z of [0, 1000, 5000, 10_000, 13_000]) {
+      expect(hot.vapour_pressure_Pa(z) / hot.pressure_Pa(z)).toBeLessThanOrEqual(MAX_VAPOUR_MOLE_FRACTION);
+    }
   });
 
   it('rejects a surface pressure or a relative humidity out of range, naming the field', () => {
