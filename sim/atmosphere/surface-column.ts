@@ -56,8 +56,8 @@ const FOG_CHECKS_PER_DECADE = 10;
  *   held constant (as for layered profiles), so e is continuous too.
  * - Pressure: hydrostatic from the surface pressure through the whole column (hydrostatic.ts).
  * - Vapour pressure in the surface layer: e = q p/(ε + (1 − ε) q), p the hydrostatic pressure.
- * - Kinks: z_ot, z_b, the nodes and the continuation's layer bases; refinements: 1 mm spacing in
- *   the lowest centimetre, growing geometrically (surfaceLayerRefinements) up to z_b.
+ * - Kinks: z_ot, z_b, the nodes and the continuation's layer bases; refinements: spacing z/20 from
+ *   z_ot up to z_b (geometric growth), at most 1 mm in the lowest centimetre (surfaceLayerRefinements).
  *
  * Validates: the observations (InputRangeError naming `atmosphere.bulk.<field>`), the nodes
  * (`atmosphere.nodes[i].height_m`, first above the air temperature height) and `above`.
@@ -106,7 +106,7 @@ export function resolveBulkColumn(spec: BulkAtmosphere, options: BulkColumnOptio
     kinks_m: [zot, ...upper.kinks_m.filter((z) => z >= zb)],
     top_m: upper.top_m,
   };
-  const refinements = surfaceLayerRefinements(zb);
+  const refinements = surfaceLayerRefinements(zot, zb);
   const pressure = hydrostaticPressure(temperature, spec.surface_pressure_Pa, { refinements });
 
   const eps = MOLAR_MASS_RATIO;

@@ -128,25 +128,33 @@ export function blendingHeight_m(
   return { height_m, limited_by };
 }
 
-/** Spacing in the lowest centimetre, m: 1 mm. */
+/** Spacing wanted in the lowest centimetre at least, m: 1 mm. */
 export const SURFACE_REFINEMENT_BOTTOM_SPACING_M = 0.001;
-/** Top of the uniformly fine bottom band, m: 1 cm. */
+/** Top of the band with at most 1 mm spacing, m: 1 cm. */
 export const SURFACE_REFINEMENT_BOTTOM_TOP_M = 0.01;
-/** Cells per doubling of height above the bottom band (spacing = 10 % of the band's base). */
-export const SURFACE_REFINEMENT_PER_OCTAVE = 10;
+/**
+ * Cells per doubling of height above the roughness length: 20, a spacing of 3.5–5 % of the height.
+ * A cubic Hermite cell of relative width w on c·ln z errs by about w⁴/64·|c|; with c ≈ (θ_* / κ)
+ * ∂n/∂T ≈ 1e-6 at most, w = 0.05 keeps n − 1 within 1e-13 (the table builder does not split cells
+ * below 0.1 mm, so the starting grid must be fine enough next to z_ot by itself).
+ */
+export const SURFACE_REFINEMENT_PER_OCTAVE = 20;
 
 /**
- * Refinements that let a grid resolve the logarithmic layer: 1 mm spacing from 0 to 1 cm, then
- * bands [a, 2a] with spacing a/10 (spacing about 5–10 % of the height) up to top_m.
- * A cubic Hermite cell of relative width h/z on a log profile errs by about (h/z)⁴/64 · |θ_* / κ|,
- * below 1e-6 K here.
- * @param top_m top of the surface layer (the blending height), m (> 0).
- * @returns refinements in increasing height, contiguous, covering 0..top_m.
+ * Refinements that let a grid resolve the logarithmic layer: spacing z/20 in bands [a, 2a] from the
+ * roughness length z_ot up to top_m (geometric growth), at most 1 mm in the lowest centimetre, and
+ * one band [0, z_ot] where the profile is held constant.
+ * @param roughness_heat_m z_ot, m (> 0): where the log profile starts.
+ * @param top_m top of the surface layer (the blending height), m (> roughness_heat_m).
+ * @returns refinements in increasing order of from_m; the geometric bands are contiguous from z_ot
+ * to top_m.
  */
-export function surfaceLayerRefinements(top_m: number): { from_m: number; to_m: number; spacing_m: number }[] {
-  const bottom = Math.min(SURFACE_REFINEMENT_BOTTOM_TOP_M, top_m);
-  const bands = [{ from_m: 0, to_m: bottom, spacing_m: SURFACE_REFINEMENT_BOTTOM_SPACING_M }];
-  for (let a = bottom; a < top_m; a *= 2) {
+export function surfaceLayerRefinements(roughness_heat_m: number, top_m: number): { from_m: number; to_m: number; spacing_m: number }[] {
+  const bands = [
+    { from_m: 0, to_m: roughness_heat_m, spacing_m: roughness_heat_m },
+    { from_m: 0, to_m: Math.min(SURFACE_REFINEMENT_BOTTOM_TOP_M, top_m), spacing_m: SURFACE_REFINEMENT_BOTTOM_SPACING_M },
+  ];
+  for (let a = roughness_heat_m; a < top_m; a *= 2) {
     bands.push({ from_m: a, to_m: Math.min(2 * a, top_m), spacing_m: a / SURFACE_REFINEMENT_PER_OCTAVE });
   }
   return bands;

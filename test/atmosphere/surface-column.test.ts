@@ -4,6 +4,9 @@ import { InputRangeError } from '../../sim/errors.js';
 import { resolveBulkColumn } from '../../sim/atmosphere/surface-column.js';
 import { surfaceLayerProfile } from '../../sim/atmosphere/surface-profile.js';
 import { saturationVapourPressureBuck_Pa, specificHumidity } from '../../sim/atmosphere/surface-thermo.js';
+import { buildIndexTable, indexAt } from '../../sim/refractivity/build-table.js';
+import { evaluateIndex } from '../../sim/refractivity/index-table.js';
+import { refractivityModel } from '../../sim/refractivity/models.js';
 import type { BulkAtmosphere } from '../../sim/scenario.js';
 import { expectClose } from '../support/close.js';
 
@@ -87,7 +90,7 @@ describe('bulk atmosphere resolved to an air column', () => {
   });
   it('asks for millimetre spacing near the sea and marks z_ot and the blending height as kinks', () => {
     const r = resolveBulkColumn(bulk(20), OPTIONS);
-    expect(r.column.refinements[0]).toEqual({ from_m: 0, to_m: 0.01, spacing_m: 0.001 });
+    expect(r.column.refinements).toContainEqual({ from_m: 0, to_m: 0.01, spacing_m: 0.001 });
     expect(r.column.kinks_m[0]).toBe(r.flux.roughness_heat_m);
     expect(r.column.kinks_m).toContain(r.blending_height_m);
     expect(r.column.top_m).toBe(86_000);
@@ -99,6 +102,25 @@ describe('bulk atmosphere resolved to an air column', () => {
       const numeric = (c.vapour_pressure_Pa(z + h) - c.vapour_pressure_Pa(z - h)) / (2 * h);
       // h = 1e-5 z: truncation ~1e-10 relative; rounding of e (~1e3 Pa, 1e-16 relative) over 2h.
       expectClose(c.vapourGradient_Pa_per_m(z, 1), numeric, { rel: 1e-6, abs: 1e-9 / z });
+    }
+  });
+});
+
+describe('index table of a bulk atmosphere', () => {
+  it('resolves the logarithmic layer from a fraction of a millimetre up: table and direct evaluation agree', () => {
+    // The accuracy asked of every index table (sim/refractivity/build-table.ts): 1e-12 in n − 1,
+    // 1e-3 relative in dn/dz.
+    for (const sea_C of [20, 10]) {
+      const column = resolveBulkColumn(bulk(sea_C), OPTIONS).column;
+      const model = refractivityModel('ciddor');
+      const table = buildIndexTable(column, model);
+      const out = new Float64Array(2);
+      for (let z = 2e-4; z < 60; z *= 1.13) {
+        evaluateIndex(table, z, out);
+        const direct = indexAt(column, model, z);
+        expectClose(out[0], direct.nm1, { abs: 1e-12 });
+        expectClose(out[1], direct.dndzAbove, { rel: 1e-3 });
+      }
     }
   });
 });

@@ -167,14 +167,18 @@ describe('blending height', () => {
 });
 
 describe('surface-layer refinements', () => {
-  it('ask for 1 mm spacing in the lowest centimetre and grow geometrically, contiguous up to the top', () => {
-    const bands = surfaceLayerRefinements(60);
-    expect(bands[0]).toEqual({ from_m: 0, to_m: 0.01, spacing_m: 0.001 });
-    for (let i = 1; i < bands.length; i++) {
-      expect(bands[i].from_m).toBe(bands[i - 1].to_m);
-      expect(bands[i].spacing_m / bands[i].from_m).toBeCloseTo(0.1, 12);
+  it('ask for at most 1 mm spacing in the lowest centimetre and z/20 from z_ot up, contiguous to the top', () => {
+    const zot = 1.6e-4;
+    const bands = surfaceLayerRefinements(zot, 60);
+    expect(bands[0]).toEqual({ from_m: 0, to_m: zot, spacing_m: zot });
+    expect(bands[1]).toEqual({ from_m: 0, to_m: 0.01, spacing_m: 0.001 });
+    const geometric = bands.slice(2);
+    expect(geometric[0].from_m).toBe(zot);
+    for (let i = 0; i < geometric.length; i++) {
+      if (i > 0) expect(geometric[i].from_m).toBe(geometric[i - 1].to_m);
+      expect(geometric[i].spacing_m / geometric[i].from_m).toBeCloseTo(0.05, 12);
     }
-    expect(bands[bands.length - 1].to_m).toBe(60);
-    expect(bands.length).toBe(1 + Math.ceil(Math.log2(60 / 0.01)));
+    expect(geometric[geometric.length - 1].to_m).toBe(60);
+    expect(geometric.length).toBe(Math.ceil(Math.log2(60 / zot)));
   });
 });
