@@ -8,6 +8,7 @@ import { INDEX_MODEL_VALIDITY, checkOpticalOptions, refractivityModel } from '..
 import type { Scenario } from '../scenario.js';
 import type { AirColumn } from './column.js';
 import { resolveAirColumn } from './resolve.js';
+import { resolveBulkColumn } from './surface-column.js';
 import { US1976_TOP_M } from './us1976.js';
 
 /** The medium of a scenario. */
@@ -43,17 +44,22 @@ export function buildMedium(scenario: Scenario): Medium {
   const optics = scenario.optics;
   checkOpticalOptions(optics.index_model, optics, 'optics.');
   let column: AirColumn;
+  let surfaceWarnings: string[] = [];
   switch (atmosphere.kind) {
     case 'profile':
     case 'standard':
       column = resolveAirColumn(atmosphere);
       break;
-    case 'bulk':
-      throw new Error('bulk atmospheres are resolved by the surface-layer module');
+    case 'bulk': {
+      const bulk = resolveBulkColumn(atmosphere);
+      column = bulk.column;
+      surfaceWarnings = bulk.warnings;
+      break;
+    }
     default:
       throw new Error(`unknown atmosphere kind ${JSON.stringify((atmosphere as { kind: unknown }).kind)}`);
   }
-  const warnings = columnWarnings(column, optics.index_model);
+  const warnings = [...surfaceWarnings, ...columnWarnings(column, optics.index_model)];
   const table = optics.index_model === 'none' ? vacuumTable(column.top_m) : buildIndexTable(column, refractivityModel(optics.index_model, optics));
   return { column, table, warnings };
 }

@@ -41,7 +41,7 @@ describe('the medium of a scenario', () => {
     expect(medium.table.top_m).toBe(medium.column.top_m);
   });
 
-  it('leaves bulk atmospheres to the surface-layer module', () => {
+  it('resolves bulk atmospheres with the surface-layer module, passing its warnings on', () => {
     const bulk: AtmosphereSpec = {
       kind: 'bulk',
       sea_temperature_K: 283.15,
@@ -55,7 +55,12 @@ describe('the medium of a scenario', () => {
       nodes: [],
       above: { kind: 'us1976' },
     };
-    expect(() => buildMedium(scenario(bulk))).toThrow('bulk atmospheres are resolved by the surface-layer module');
+    const medium = buildMedium(scenario(bulk));
+    // The surface-layer profile passes through the observed air temperature at its height (identity of the construction).
+    expectClose(medium.column.temperature_K(10), 288.15, { abs: 1e-9 });
+    // Warm air over cold water with L ≈ 6.4 m: the stable cap ends the surface layer (sim/atmosphere/surface-profile.ts).
+    expect(medium.warnings.join(' ')).toMatch(/stable air/);
+    expect(medium.table.top_m).toBe(86_000);
   });
 
   it('warns when a constant lapse ends the air below 86 km', () => {
