@@ -7,3 +7,4 @@ export * from './edlen.js';
 export * from './birch-downs.js';
 export * from './radio.js';
 export * from './models.js';
+export * from './build-table.js';
