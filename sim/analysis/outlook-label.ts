@@ -42,7 +42,7 @@ export interface LabelFindings {
   /** Whether the landmark's top is seen at all, in the row's air and in the reference air. */
   landmark_seen: boolean;
   reference_landmark_seen: boolean;
-  /** Images of the landmark (monotonic pieces of the transfer curve over its height). */
+  /** Images of the landmark that an observer can tell apart (taller than the resolving limit). */
   image_count: number;
   /** Apparent horizon elevation minus the reference's, rad. */
   horizon_shift_rad: number;
@@ -50,12 +50,12 @@ export interface LabelFindings {
 }
 
 /**
- * Scales of the strength (our own): a shift of FULL_SHIFT_RAD (6′, about a sixth of the Moon's
- * width), a magnification of 2 or ½, three images, or a landmark brought into or out of view each
- * count as a full-strength (1) effect; a second image counts 0.6; a false horizon alone 0.4, and
- * only when it stands at least NOTICEABLE_SHIFT_RAD above the reference horizon (a duct a few
- * millimetres deep also makes the horizon "false", but nobody sees it).
- * Shifts and stretches below NOTICEABLE_* are not named in the label.
+ * Scales of the strength (our own): a shift of the landmark or of the horizon by FULL_SHIFT_RAD
+ * (6′), a magnification of 2 or ½, three images, or a landmark
+ * brought into or out of view each count as a full-strength (1) effect; a second image counts 0.6;
+ * a false horizon at least 0.4, and only when it stands at least NOTICEABLE_SHIFT_RAD above the
+ * reference horizon (a duct a few millimetres deep also makes the horizon "false", but nobody
+ * sees it). Shifts and stretches below NOTICEABLE_* are not named in the label.
  */
 export const LABEL_SCALES = {
   FULL_SHIFT_RAD: 6 * EYE_RESOLUTION_RAD,
@@ -95,7 +95,7 @@ export function outlookLabel(f: LabelFindings): OutlookLabel {
     parts.push(f.landmark_seen ? 'lifted into view' : 'sunk out of sight');
     scores.push(s.INTO_OR_OUT_OF_VIEW);
   }
-  const shift = f.landmark_shift_rad ?? (f.landmark_seen || f.reference_landmark_seen ? null : f.horizon_shift_rad);
+  const shift = f.landmark_shift_rad;
   if (shift !== null && Math.abs(shift) >= s.NOTICEABLE_SHIFT_RAD) parts.push(shift > 0 ? 'lifted' : 'sunk');
   if (shift !== null) scores.push(Math.abs(shift) / s.FULL_SHIFT_RAD);
   const m = f.landmark_magnification;
@@ -104,10 +104,14 @@ export function outlookLabel(f: LabelFindings): OutlookLabel {
     else if (m <= 1 / s.NOTICEABLE_MAGNIFICATION) parts.push('squashed');
     scores.push(Math.abs(Math.log2(m)) / s.FULL_LOG2_MAGNIFICATION);
   }
-  if (f.false_horizon && f.horizon_shift_rad >= s.NOTICEABLE_SHIFT_RAD) {
+  const horizon = f.horizon_shift_rad;
+  if (f.false_horizon && horizon >= s.NOTICEABLE_SHIFT_RAD) {
     parts.push('false horizon');
     scores.push(s.FALSE_HORIZON);
+  } else if (Math.abs(horizon) >= s.NOTICEABLE_SHIFT_RAD) {
+    parts.push(horizon > 0 ? 'horizon raised' : 'horizon lowered');
   }
+  scores.push(Math.abs(horizon) / s.FULL_SHIFT_RAD);
   const strength = Math.min(1, Math.max(...scores.map((x) => (Number.isNaN(x) ? 0 : x))));
   return { label: parts.length > 0 ? parts.slice(0, 3).join(', ') : 'ordinary view', strength };
 }

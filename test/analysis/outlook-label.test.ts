@@ -89,6 +89,13 @@ describe('outlook labels', () => {
     expect(raised.strength).toBe(LABEL_SCALES.FALSE_HORIZON);
   });
 
+  it('name a horizon moved by 1′ or more when it is not a false one, and count the move in the strength', () => {
+    const lowered = outlookLabel({ ...ORDINARY, horizon_shift_rad: -1.5 * RAD_PER_ARCMIN });
+    expect(lowered.label).toBe('horizon lowered');
+    expectClose(lowered.strength, 0.25, { abs: STRENGTH_TOL });
+    expect(outlookLabel({ ...ORDINARY, horizon_shift_rad: 1.2 * RAD_PER_ARCMIN }).label).toBe('horizon raised');
+  });
+
   it('join at most three parts, the strongest kinds first', () => {
     const label = outlookLabel({
       ...ORDINARY,
