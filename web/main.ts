@@ -83,7 +83,7 @@ function renderEditor(): void {
 }
 
 function row(label: string, input: HTMLElement, unit: string, path: string, hint = ''): HTMLElement {
-  const wrap = el('div', { class: 'field' });
+  const wrap = el('div', { class: unit ? 'field' : 'field wide' });
   const name = el('label', { class: 'field-label' }, label);
   const id = `f-${path.replace(/\W+/g, '-')}`;
   input.id = id;
@@ -96,6 +96,7 @@ function renderNodes(): void {
   const nodes = nodesOf(session.scenario);
   const section = byId('nodes').closest('section') as HTMLElement;
   section.hidden = airKind(session.scenario) === 'standard';
+  byId('nodes').classList.toggle('empty', nodes.length === 0);
   const body = byId('nodes').querySelector('tbody') as HTMLElement;
   body.replaceChildren();
   nodes.forEach((node, i) => {
@@ -190,12 +191,8 @@ async function openScenario(id: string): Promise<void> {
 
 // ── Drawing ───────────────────────────────────────────────────────────────────────────────────
 
-async function plot(id: string, figure: Figure, name: string): Promise<unknown> {
-  const t = performance.now();
-  const r = await Plotly.react(byId(id), figure.data, figure.layout, plotConfig(name));
-  (window as unknown as { __t: Record<string, number> }).__t ??= {};
-  (window as unknown as { __t: Record<string, number> }).__t[id] = performance.now() - t;
-  return r;
+function plot(id: string, figure: Figure, name: string): Promise<unknown> {
+  return Plotly.react(byId(id), figure.data, figure.layout, plotConfig(name));
 }
 
 async function draw(update: SessionUpdate): Promise<void> {
@@ -218,7 +215,10 @@ async function draw(update: SessionUpdate): Promise<void> {
       byId<HTMLInputElement>('fan-to').placeholder = data.trace.fan.to_deg.toFixed(3);
     }
   }
-  byId('status').textContent = statusLine(update, performance.now() - started);
+  const draw_ms = performance.now() - started;
+  byId('status').textContent = statusLine(update, draw_ms);
+  document.body.dataset.serverMs = update.server_ms.toFixed(1);
+  document.body.dataset.drawMs = draw_ms.toFixed(1);
   document.body.dataset.ready = String(update.generation);
 }
 

@@ -14,6 +14,8 @@ export interface NodeJson {
 
 /** Node step when adding a node above the last one, m. */
 const ADD_NODE_STEP_M = 10;
+/** The scenario file's default height of the air temperature reading, m (DESIGN.md §5 bulk). */
+const BULK_MEASUREMENT_HEIGHT_M = 10;
 
 /** The scenario's temperature nodes (empty when the air is the standard atmosphere). */
 export function nodesOf(scenario: ScenarioJson): NodeJson[] {
@@ -23,11 +25,19 @@ export function nodesOf(scenario: ScenarioJson): NodeJson[] {
 
 const num = (v: unknown, fallback: number): number => (typeof v === 'number' ? v : fallback);
 
-/** Adds a node above the last (same temperature, ADD_NODE_STEP_M higher), or one at 0 m, 15 °C. */
+/**
+ * Adds a node above the last (same temperature, ADD_NODE_STEP_M higher). The first node goes at
+ * 0 m and 15 °C, or for sea and air readings ADD_NODE_STEP_M above the air temperature's height
+ * (nodes there continue the surface layer upward), at the air temperature.
+ */
 export function addNode(scenario: ScenarioJson): ScenarioJson {
   const nodes = nodesOf(scenario);
   const last = nodes[nodes.length - 1];
-  const node = last ? { height_m: num(last.height_m, 0) + ADD_NODE_STEP_M, temperature_C: num(last.temperature_C, 15) } : { height_m: 0, temperature_C: 15 };
+  const bulk = airKind(scenario) === 'bulk';
+  const first = bulk
+    ? { height_m: num(getPath(scenario, 'atmosphere.bulk.air_temperature_height_m'), BULK_MEASUREMENT_HEIGHT_M) + ADD_NODE_STEP_M, temperature_C: num(getPath(scenario, 'atmosphere.bulk.air_temperature_C'), 15) }
+    : { height_m: 0, temperature_C: 15 };
+  const node = last ? { height_m: num(last.height_m, 0) + ADD_NODE_STEP_M, temperature_C: num(last.temperature_C, 15) } : first;
   return setPath(scenario, 'atmosphere.profile', [...nodes, node]);
 }
 

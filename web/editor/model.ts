@@ -35,16 +35,16 @@ export type Parsed = { ok: true; value: unknown } | { ok: false; message: string
 
 export const AIR_KINDS: [AirKind, string][] = [
   ['profile', 'temperature nodes'],
-  ['standard', 'standard atmosphere (US 1976)'],
-  ['bulk', 'sea and air observations'],
+  ['standard', 'standard (US 1976)'],
+  ['bulk', 'sea & air readings'],
 ];
 
 const INDEX_MODELS: [string, string][] = [
   ['ciddor', 'Ciddor 1996'],
   ['edlen', 'Edlén 1966'],
   ['birch-downs', 'Birch & Downs'],
-  ['radio', 'radio (ITU-R P.453)'],
-  ['none', 'none: straight lines'],
+  ['radio', 'radio (P.453)'],
+  ['none', 'none (straight)'],
 ];
 
 const SHAPES: [string, string][] = [
