@@ -3,7 +3,7 @@ import { horizon } from '../../sim/analysis/dip.js';
 import { InputRangeError } from '../../sim/errors.js';
 import { evaluateIndex, type IndexTable } from '../../sim/refractivity/index-table.js';
 import { expectClose } from '../support/close.js';
-import { R_TEST_M, quadraticMedium, quadraticMediumMinimum_m } from './analytic-media.js';
+import { R_TEST_M, powerLawMedium, quadraticMedium, quadraticMediumMinimum_m } from './analytic-media.js';
 import { layeredAtmosphere, standardAtmosphere, tableOf } from './media.js';
 import { youngZigzag } from './young.js';
 
@@ -32,6 +32,21 @@ describe('the apparent horizon without an atmosphere (n ≡ 1)', () => {
       expect(found.trapped).toBeNull();
     });
   }
+});
+
+describe('the horizon distance in a medium with constant ray curvature', () => {
+  it('is R·dip/(1 − k) exactly when n ∝ r^-k (the effective-Earth result; independent derivation)', () => {
+    // n·r ∝ r^(1−k) gives θ = [arccos(c/f(r2)) − arccos(c/f(r1))]/(1 − k) (analytic-media.ts); the
+    // limiting ray has c = f(R), so the distance is R·arccos(f(R)/f(R+h))/(1 − k) = R·dip/(1 − k).
+    const k = 0.17;
+    const table = powerLawMedium(1.0003, k, R_TEST_M, 5000, 25);
+    for (const h of [2, 10, 100]) {
+      const found = horizon(table, h, R_TEST_M);
+      const exactDip = 2 * Math.asin(Math.sqrt(Math.expm1((1 - k) * Math.log1p(h / R_TEST_M)) / (2 * Math.pow(1 + h / R_TEST_M, 1 - k))));
+      expectClose(found.dip_rad, exactDip, { rel: 1e-12 });
+      expectClose(found.horizon_distance_m as number, (R_TEST_M * found.dip_rad) / (1 - k), { rel: 1e-12 });
+    }
+  });
 });
 
 describe('the dip of the sea horizon in a stratified atmosphere', () => {
