@@ -10,8 +10,10 @@
  * fixed frame turns by dτ = dθ − dα (a straight line has dα = dθ); differentiating c = f cos α
  * gives dα = (f′/f) cot α dr with f′ = n + r n′, so dτ = cot α (1/r − f′/f) dr = −(n′/n) cot α dr.
  * The astronomical refraction of a ray leaving the atmosphere is its total bending τ: the true
- * (airless) elevation of its source is α_obs − τ. Smart, Textbook on Spherical Astronomy (6th ed.,
- * 1977), ch. III (refraction integral); Auer & Standish (2000), Astron. J. 119, 2472, eqs. 1–5.
+ * (airless) elevation of its source is α_obs − τ. The refraction integral in this form: Smart,
+ * Textbook on Spherical Astronomy (6th ed., 1977), ch. III; Auer & Standish (2000), Astron. J. 119,
+ * 2472 (who integrate over the zenith angle instead) — both cited from memory, equation numbers
+ * not checked.
  *
  * Both integrands have an inverse-square-root singularity at a turning point r_t, where f = c.
  * The substitution z = z_t ± u² (u = √|z − z_t|) turns it into a smooth integrand,
@@ -69,7 +71,8 @@ export interface RaySegmentIntegrals {
  *   about 1e-13 m (fine for steep rays only).
  * @returns θ and τ, rad. Accuracy about 1e-12 relative; a turning point where f′ = 0 (the limiting
  *   ray of a perfect duct) makes both integrals diverge (callers exclude that case).
- * Reference: Auer & Standish (2000), Astron. J. 119, 2472 (bending integral and its substitution).
+ * Reference: the integrals above (module comment); the √ substitution is the usual one for an
+ * inverse-square-root endpoint singularity (as in DESIGN.md §3 item 4).
  */
 export function integrateRaySegment(
   profile: InvariantProfile,
