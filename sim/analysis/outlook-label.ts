@@ -91,8 +91,9 @@ export function outlookLabel(f: LabelFindings): OutlookLabel {
     parts.push(f.air_sea_difference_K >= 0 ? 'stacked images' : 'mirrored below');
     scores.push(f.image_count >= 3 ? s.THIRD_IMAGE : s.SECOND_IMAGE);
   }
+  const hiddenByRaisedSea = !f.landmark_seen && f.reference_landmark_seen && f.horizon_shift_rad > 0;
   if (f.landmark_seen !== f.reference_landmark_seen) {
-    parts.push(f.landmark_seen ? 'lifted into view' : 'sunk out of sight');
+    parts.push(f.landmark_seen ? 'lifted into view' : hiddenByRaisedSea ? 'hidden behind raised horizon' : 'sunk out of sight');
     scores.push(s.INTO_OR_OUT_OF_VIEW);
   }
   const shift = f.landmark_shift_rad;
@@ -106,9 +107,9 @@ export function outlookLabel(f: LabelFindings): OutlookLabel {
   }
   const horizon = f.horizon_shift_rad;
   if (f.false_horizon && horizon >= s.NOTICEABLE_SHIFT_RAD) {
-    parts.push('false horizon');
+    if (!hiddenByRaisedSea) parts.push('false horizon');
     scores.push(s.FALSE_HORIZON);
-  } else if (Math.abs(horizon) >= s.NOTICEABLE_SHIFT_RAD) {
+  } else if (Math.abs(horizon) >= s.NOTICEABLE_SHIFT_RAD && !hiddenByRaisedSea) {
     parts.push(horizon > 0 ? 'horizon raised' : 'horizon lowered');
   }
   scores.push(Math.abs(horizon) / s.FULL_SHIFT_RAD);

@@ -41,6 +41,9 @@ describe('stability classes', () => {
   });
 });
 
+/** A row whose landmark is not seen, though it is in the reference. */
+const outOfSight = (): LabelFindings => ({ ...ORDINARY, landmark_shift_rad: null, landmark_magnification: null, landmark_seen: false, image_count: 0 });
+
 describe('outlook labels', () => {
   it('call a row with shifts below the eye’s 1′ an ordinary view, with a small strength', () => {
     const { label, strength } = outlookLabel({ ...ORDINARY, landmark_shift_rad: 0.5 * RAD_PER_ARCMIN, landmark_magnification: 1.1 });
@@ -80,6 +83,10 @@ describe('outlook labels', () => {
     expect(into.strength).toBe(1);
     const out = outlookLabel({ ...ORDINARY, landmark_shift_rad: null, landmark_magnification: null, landmark_seen: false, image_count: 0 });
     expect(out.label).toBe('sunk out of sight');
+    // Over cold water a duct around the eye can raise the sea's edge above the landmark.
+    const behind = outlookLabel({ ...outOfSight(), false_horizon: true, horizon_shift_rad: 8 * RAD_PER_ARCMIN });
+    expect(behind.label).toBe('hidden behind raised horizon');
+    expect(behind.strength).toBe(1);
   });
 
   it('name a false horizon only when it stands at least 1′ above the reference horizon', () => {
