@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { horizon } from '../../sim/analysis/dip.js';
 import { InputRangeError } from '../../sim/errors.js';
 import { evaluateIndex, type IndexTable } from '../../sim/refractivity/index-table.js';
+import { quadratureRange } from '../../sim/trace/quadrature.js';
+import { traceRay } from '../../sim/trace/ray.js';
 import { expectClose } from '../support/close.js';
 import { R_TEST_M, powerLawMedium, quadraticMedium, quadraticMediumMinimum_m } from './analytic-media.js';
 import { layeredAtmosphere, standardAtmosphere, tableOf } from './media.js';
@@ -147,6 +149,41 @@ describe('false horizons and trapped rays', () => {
     expectClose(found.grazing_height_m, quadraticMediumMinimum_m(3e-4, 3e-7, 3e-9, R_TEST_M), { abs: 1e-9 });
     expect(found.horizon_distance_m).toBeNull();
     expect(found.warnings.length).toBe(1);
+  });
+});
+
+describe('the horizon confirmed by the ray integrator (sim/trace)', () => {
+  /** Offset of the confirming rays from the horizon, rad: they graze 1–2 mm from the limiting ray's grazing point. */
+  const OFFSET_RAD = 1e-7;
+  const cases: [string, IndexTable, number][] = [
+    ['US 1976 at 15 °C, eye 10 m', tableOf(standardAtmosphere(15)), 10],
+    ["Young's elevated duct, eye 70 m", tableOf(youngZigzag()), 70],
+    ['a duct reaching the sea, eye 70 m (false horizon)', tableOf(youngZigzag(10)), 70],
+    ['inside a duct reaching the sea, eye 20 m (sea above the horizontal)', tableOf(youngZigzag(10)), 20],
+  ];
+  for (const [name, table, h] of cases) {
+    it(`sends the ray just below the horizon to the sea and the ray just above it past the grazing point: ${name}`, () => {
+      const found = horizon(table, h, R_TEST_M);
+      const below = traceRay(table, h, found.horizon_elevation_rad - OFFSET_RAD);
+      const above = traceRay(table, h, found.horizon_elevation_rad + OFFSET_RAD);
+      expect(below.fate).toBe('surface');
+      expect(above.fate).not.toBe('surface');
+      if (found.horizon_elevation_rad < 0) {
+        // The ray just above turns a hair above the grazing height, near the horizon distance
+        // (the issue's check: distance to 0.1 %; the 1e-7 rad offset moves it by about 0.01 %).
+        expectClose(above.minHeight_m, found.grazing_height_m, { abs: 0.005 });
+        expectClose(above.minHeightRange_m, found.horizon_distance_m as number, { rel: 1e-3 });
+      }
+    });
+  }
+
+  it("agrees with the tracer's own invariant quadrature of the limiting ray's range (sim/trace/quadrature.ts)", () => {
+    // An independent implementation of DESIGN.md §3 item 4 (different substitution anchor and
+    // evaluation of n·r − c); 1e-6 relative leaves room for its start from the elevation angle.
+    const table = tableOf(youngZigzag());
+    const found = horizon(table, 70, R_TEST_M);
+    const range = quadratureRange(table, 70, found.horizon_elevation_rad, 0, { earthRadius_m: R_TEST_M });
+    expectClose(range as number, found.horizon_distance_m as number, { rel: 1e-6 });
   });
 });
 
