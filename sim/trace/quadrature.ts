@@ -4,66 +4,26 @@
  *
  *   θ = ∫ c dr / (r · sqrt(n²r² − c²)).
  *
- * n²r² − c² is written as D·(D + 2c) with D = n r − c evaluated as a difference of small terms
- * (no cancellation of r ≈ 6.4e6 m). At a turning point D = 0 and the integrand has an inverse
+ * n²r² − c² is written as D·(D + 2c) with D = n r − c evaluated without cancellation
+ * (invariant-excess.ts). At a turning point D = 0 and the integrand has an inverse
  * square-root singularity; the substitution z = z_t ± w² (z_t the turning height) makes it finite,
  * 2w / sqrt(D) → 2 / sqrt(D'(z_t)). A nearby turning point outside the interval (a ray that starts
  * almost horizontal) is treated the same way with z_t extrapolated. The interval is split at every
  * table node (n'' jumps there, dn/dz at kinks) and each piece integrated by adaptive Gauss–Kronrod.
- * Accuracy: relative 1e-12 or better away from the duct threshold (D'(z_t) → 0), where the
- * substitution loses its benefit. Reference: Born & Wolf, Principles of Optics, §3.2.2 (ray in a
+ * Accuracy: relative 1e-11 or better (measured against exact straight lines and the perfect duct),
+ * away from the duct threshold (D'(z_t) → 0), where the substitution loses its benefit. Reference: Born & Wolf, Principles of Optics, §3.2.2 (ray in a
  * spherically stratified medium); DESIGN.md §3.
  */
 import { EARTH_RADIUS_M } from '../constants.js';
 import type { IndexTable } from '../refractivity/index-table.js';
-import { RayEquations } from './equations.js';
 import { integrateAdaptive } from './gauss-kronrod.js';
+import { InvariantExcess } from './invariant-excess.js';
 
 /** Relative accuracy asked of each piece of the quadrature. */
 const PIECE_TOLERANCE = 1e-13;
 
 /** Bisection steps to pin a turning height to double precision within one table cell. */
 const TURNING_BISECTIONS = 200;
-
-/** A ray fixed by its start; evaluates D(z) = n(z)·r(z) − c without cancellation. */
-class InvariantExcess {
-  readonly eq: RayEquations;
-  readonly R: number;
-  readonly z0: number;
-  readonly nm10: number;
-  readonly c: number;
-  private readonly startExcess: number;
-
-  constructor(table: IndexTable, R: number, z0: number, elevation_rad: number) {
-    this.eq = new RayEquations(table, R);
-    this.R = R;
-    this.z0 = z0;
-    this.eq.sample(z0, elevation_rad < 0);
-    this.nm10 = this.eq.nm1;
-    this.c = (1 + this.nm10) * (R + z0) * Math.cos(elevation_rad);
-    const half = Math.sin(0.5 * elevation_rad);
-    this.startExcess = (1 + this.nm10) * (R + z0) * 2 * half * half; // n0 r0 (1 − cos α0)
-  }
-
-  /** D(z) = n r − c, m. Leaves the sample at z (dn/dz from below when below). */
-  excess(z: number, below = false): number {
-    this.eq.sample(z, below);
-    const nm1 = this.eq.nm1;
-    return z - this.z0 + this.R * (nm1 - this.nm10) + z * nm1 - this.z0 * this.nm10 + this.startExcess;
-  }
-
-  /** dD/dz = n + r dn/dz at the last sample. */
-  slope(z: number): number {
-    return 1 + this.eq.nm1 + (this.R + z) * this.eq.dndz_per_m;
-  }
-
-  /** dθ/dz = c / (r sqrt(D (D + 2c))), 1/m (0 where rounding makes D ≤ 0 at a turning point). */
-  integrand(z: number): number {
-    const d = this.excess(z);
-    const f = d * (d + 2 * this.c);
-    return f > 0 ? this.c / ((this.R + z) * Math.sqrt(f)) : 0;
-  }
-}
 
 /**
  * Height of the first turning point (D = 0) met going from z in direction dir, searched up to
@@ -95,19 +55,19 @@ function turningHeight(ray: InvariantExcess, table: IndexTable, z: number, dir: 
 
 /**
  * θ between heights lo < hi on one monotonic branch (D > 0 inside), rad. turning: which end is
- * the ray's turning point (D = 0 there), if either. The range next to a turning point grows as
- * sqrt(z − z_t), so the integral must start at the exact root of D: the anchor is that root,
- * extrapolated from the end (D(end)/D'(end), a rounding-level correction), and w starts at 0.
+ * the ray's turning point, where the caller has made D exactly 0 (InvariantExcess.setReference).
+ * The substitution is anchored there and w starts at 0. Without a turning end, a turning point
+ * just beyond an end (D small there) is extrapolated, D(end)/D'(end), and anchors it instead.
  */
 function branchAngle(ray: InvariantExcess, table: IndexTable, lo: number, hi: number, turning: 'lo' | 'hi' | null): number {
   if (!(hi > lo)) return 0;
   // Anchor of the substitution: a turning point at (or just beyond) one end, if one is near.
   const dLo = ray.excess(lo);
   const slopeLo = ray.slope(lo);
-  const gapLo = turning === 'lo' ? dLo / slopeLo : dLo >= 0 && slopeLo > 0 ? dLo / slopeLo : Infinity;
+  const gapLo = turning === 'lo' ? 0 : dLo >= 0 && slopeLo > 0 ? dLo / slopeLo : Infinity;
   const dHi = ray.excess(hi, true);
   const slopeHi = ray.slope(hi);
-  const gapHi = turning === 'hi' ? dHi / -slopeHi : dHi >= 0 && slopeHi < 0 ? dHi / -slopeHi : Infinity;
+  const gapHi = turning === 'hi' ? 0 : dHi >= 0 && slopeHi < 0 ? dHi / -slopeHi : Infinity;
   const cuts = [lo];
   for (const z of table.z_m) if (z > lo && z < hi) cuts.push(z);
   cuts.push(hi);
@@ -119,7 +79,11 @@ function branchAngle(ray: InvariantExcess, table: IndexTable, lo: number, hi: nu
   const fromLow = turning === 'lo' || (turning === null && gapLo <= gapHi);
   const anchor = fromLow ? lo - gapLo : hi + gapHi;
   const sign = fromLow ? 1 : -1;
-  const f = (w: number): number => 2 * w * ray.integrand(anchor + sign * w * w);
+  // Anchored on the reference point (a turning point or a horizontal start): offsets are exact.
+  const exact = anchor === ray.referenceHeight_m;
+  const f = exact
+    ? (w: number): number => 2 * w * ray.integrandAtOffset(sign * w * w)
+    : (w: number): number => 2 * w * ray.integrand(anchor + sign * w * w);
   const last = cuts.length - 1;
   for (let i = 0; i < last; i++) {
     // The turning end maps to w = 0 exactly.
@@ -178,6 +142,10 @@ export function quadratureRange(table: IndexTable, observerHeight_m: number, ele
   const second = turningHeight(ray, table, turn, back, height_m);
   if (second !== null) return null;
   const end = dir < 0 ? 'lo' : 'hi';
-  const first = branchAngle(ray, table, Math.min(z0, turn), Math.max(z0, turn), end);
-  return R * (first + branchAngle(ray, table, Math.min(turn, height_m), Math.max(turn, height_m), end));
+  // The turning point as the exact root of D (a rounding-level Newton correction of the bisection)
+  // and the reference of D from here on, so D near it is free of the table's rounding.
+  const root = turn - ray.excess(turn) / ray.slope(turn);
+  ray.setReference(root, 0);
+  const first = branchAngle(ray, table, Math.min(z0, root), Math.max(z0, root), end);
+  return R * (first + branchAngle(ray, table, Math.min(root, height_m), Math.max(root, height_m), end));
 }
