@@ -102,7 +102,7 @@ describe('the simulated view', () => {
     const view = simulatedView(m.table, m.observer_m, m.range_m, silhouette('vessel', 26), { rows: 201, columns: 41 });
     expect(view.false_horizon).toBe(true);
     expect(view.false_horizon_elevation_rad!).toBeGreaterThan(0);
-    const below = view.elevations_rad.findLastIndex((e) => e < view.false_horizon_elevation_rad!);
+    const below = view.elevations_rad.filter((e) => e < view.false_horizon_elevation_rad!).length - 1;
     expect(view.classes[below][0]).toBe(SEA);
     expect(view.classes[below + 1][0]).not.toBe(SEA);
   });
