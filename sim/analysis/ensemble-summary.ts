@@ -4,9 +4,9 @@
  * hidden height (or, when that never changes, with the target top's apparent elevation).
  */
 import { percentiles, proportion, spearman, type Percentiles } from './ensemble-stats.js';
+import type { VisibilityStatus } from './visibility.js';
 
-/** How much of the target a member sees (DESIGN.md §6 `visibility.status`). */
-export type VisibilityStatus = 'visible' | 'partly-hidden' | 'hidden';
+export type { VisibilityStatus };
 
 /** What one finished member found. Angles in rad, heights and ranges in m. */
 export interface MemberFindings {
