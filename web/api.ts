@@ -2,7 +2,7 @@
  * The viewer's client of the Loomline HTTP API: one function per route, typed results, and
  * ApiError carrying the server's field-named issues. Uses fetch only (no DOM).
  */
-import type { ErrorJson, Limits, ProfileResult, ScenarioJson, ScenarioList, TraceResult } from './types.js';
+import type { ErrorJson, FindingsJson, Limits, ProfileResult, ScenarioJson, ScenarioList, TraceResult, ViewJson } from './types.js';
 
 /** A failed request: HTTP status and the server's issues (field as a dotted path in the body). */
 export class ApiError extends Error {
@@ -52,6 +52,8 @@ export const api = {
   limits: (signal?: AbortSignal) => request<Limits>('/api/limits', undefined, signal),
   profile: (scenario: ScenarioJson, heights_m: number[], signal?: AbortSignal) => request<ProfileResult>('/api/profile', { scenario, heights_m }, signal),
   trace: (scenario: ScenarioJson, fan: FanRequest, path_points: number, signal?: AbortSignal) => request<TraceResult>('/api/trace', { scenario, fan, path_points }, signal),
+  findings: (scenario: ScenarioJson, signal?: AbortSignal) => request<FindingsJson>('/api/findings', { scenario, refraction_elevations_deg: [0] }, signal),
+  view: (scenario: ScenarioJson, signal?: AbortSignal) => request<ViewJson>('/api/view', { scenario }, signal),
 };
 
 export type Api = typeof api;

@@ -10,9 +10,10 @@ import { addNode, editNode, nodesOf, removeNode, switchAir } from './editor/air.
 import { placeIssues } from './editor/issues.js';
 import { AIR_KINDS, airKind, applyField, fieldSections, formatField, type AirKind, type FieldSpec } from './editor/model.js';
 import { airFigure } from './figures/air.js';
-import { heightsFigure, transferFromTrace } from './figures/heights.js';
+import { heightsFigure } from './figures/heights.js';
 import { pathsFigure } from './figures/paths.js';
 import { plotConfig, type Figure } from './figures/theme.js';
+import { viewFigure } from './figures/view.js';
 import { panelNotes, statusLine, summaryLines } from './summary.js';
 import { DEFAULT_VIEWER_RAYS, Session, type SessionUpdate } from './session.js';
 import type { Limits, ScenarioJson } from './types.js';
@@ -205,7 +206,8 @@ async function draw(update: SessionUpdate): Promise<void> {
     const target_height_m = data.trace.target_height_m;
     await plot('plot-air', airFigure(data.profile, { observer_height_m: data.trace.observer_height_m, target_height_m }), 'air');
     await plot('plot-paths', pathsFigure(data.trace), 'light-paths');
-    await plot('plot-heights', heightsFigure(transferFromTrace(data.trace), { target_height_m }), 'heights-at-target');
+    await plot('plot-heights', heightsFigure(data.findings.transfer, { target_height_m }), 'heights-at-target');
+    await plot('plot-view', viewFigure(data.view, { images: data.findings.visibility.images }), 'view');
     const findings = byId('findings');
     findings.replaceChildren(...summaryLines(data).map((line) => el('p', { class: `finding ${line.kind}` }, line.text)));
     const notes = byId('warnings');

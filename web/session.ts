@@ -6,7 +6,7 @@
 import { ApiError, type Api, type FanRequest } from './api.js';
 import { airSampleHeights } from './editor/air.js';
 import type { Issue } from './editor/issues.js';
-import type { ProfileResult, ScenarioJson, TraceResult } from './types.js';
+import type { FindingsJson, ProfileResult, ScenarioJson, TraceResult, ViewJson } from './types.js';
 
 /** Quiet time after the last keystroke before re-tracing, ms. A committed edit (Enter, leaving the field) traces at once. */
 export const EDIT_DEBOUNCE_MS = 250;
@@ -19,6 +19,8 @@ export const DEFAULT_VIEWER_RAYS = 501;
 export interface PanelData {
   profile: ProfileResult;
   trace: TraceResult;
+  findings: FindingsJson;
+  view: ViewJson;
 }
 
 /** What the page receives after each computation. */
@@ -88,6 +90,8 @@ export class Session {
     const results = await Promise.allSettled([
       this.api.profile(scenario, airSampleHeights(scenario), signal),
       this.api.trace(scenario, this.fan, VIEWER_PATH_POINTS, signal),
+      this.api.findings(scenario, signal),
+      this.api.view(scenario, signal),
     ]);
     if (signal.aborted || generation !== this.generation) return;
     this.inFlight = null;
@@ -95,8 +99,8 @@ export class Session {
     const server_ms = performance.now() - started;
     const failures = results.filter((r): r is PromiseRejectedResult => r.status === 'rejected').map((r) => r.reason as unknown);
     if (failures.length === 0) {
-      const [profile, trace] = results.map((r) => (r as PromiseFulfilledResult<unknown>).value) as [ProfileResult, TraceResult];
-      this.lastGood = { profile, trace };
+      const [profile, trace, findings, view] = results.map((r) => (r as PromiseFulfilledResult<unknown>).value) as [ProfileResult, TraceResult, FindingsJson, ViewJson];
+      this.lastGood = { profile, trace, findings, view };
       this.onUpdate({ generation, data: this.lastGood, stale: false, issues: [], failure: null, server_ms });
       return;
     }

@@ -81,6 +81,8 @@ export interface TransferImage {
 /** DESIGN.md §6 transfer. */
 export interface TransferJson {
   range_m: number;
+  /** Elevation window of the curve (findings only). */
+  window?: { from_elevation_deg: number; to_elevation_deg: number };
   rays: { elevation_deg: number; height_m: number | null; fate: Fate }[];
   images: TransferImage[];
   lowest_visible_height_m: number | null;
@@ -90,4 +92,69 @@ export interface TransferJson {
 /** The error body of every failed request. */
 export interface ErrorJson {
   error: { field: string; message: string; problems: string[]; issues: { field: string; message: string }[] };
+}
+
+/** An image of the findings (server/service/transfer.ts ImageJson, the fields the viewer reads). */
+export interface FindingsImage extends TransferImage {
+  angular_extent_arcmin: number;
+  resolvable?: boolean;
+}
+
+/** A comparison of the scene with a reference (looming / sinking, towering / stooping). */
+export interface ComparisonJson {
+  top_shift_arcmin: number | null;
+  magnification_ratio: number | null;
+  looming: 'looming' | 'sinking' | 'none' | null;
+  towering: 'towering' | 'stooping' | 'none' | null;
+}
+
+/** POST /api/findings (server/service/findings.ts FindingsJson, the fields the viewer reads). */
+export interface FindingsJson {
+  scenario: string;
+  observer_height_m: number;
+  range_m: number;
+  target_height_m: number;
+  target_shape: string | null;
+  index_model: string;
+  horizon: {
+    horizon_elevation_deg: number;
+    dip_arcmin: number;
+    horizon_distance_m: number | null;
+    false_horizon: boolean;
+    grazing_height_m: number;
+    ducts: { bottom_m: number; top_m: number; surface_based: boolean }[];
+    geometry: { dip_arcmin: number; horizon_distance_m: number };
+  };
+  transfer: TransferJson & { images: FindingsImage[]; looming: { standard: ComparisonJson | null; geometry: ComparisonJson | null } };
+  visibility: {
+    hidden_height_m: number;
+    visible_fraction: number;
+    image_count: number;
+    status: 'visible' | 'partly-hidden' | 'hidden';
+    images: FindingsImage[];
+    hidden_bands: { from_height_m: number; to_height_m: number }[];
+    resolution: { limit_arcmin: number; by: 'eye' | 'aperture'; visible_extent_arcmin: number; visible_resolvable: boolean; resolvable_image_count: number };
+    compared: { geometry: { status: string; hidden_height_m: number } | null; standard: { status: string; hidden_height_m: number } | null };
+  };
+  refraction: { rows: { apparent_elevation_deg: number; refraction_arcmin: number | null }[] };
+  caution: string;
+  warnings: string[];
+}
+
+/** POST /api/view (server/service/view.ts ViewJson). */
+export interface ViewJson {
+  scenario: string;
+  range_m: number;
+  elevations_deg: number[];
+  azimuths_deg: number[];
+  classes: number[][];
+  legend: string[];
+  heights_at_target_m: (number | null)[];
+  fates: Fate[];
+  background: number[];
+  horizon_elevation_deg: number;
+  false_horizon: boolean;
+  false_horizon_elevation_deg: number | null;
+  silhouette: { shape: string; width_m: number; height_m: number; outline_m: [number, number][] };
+  warnings: string[];
 }

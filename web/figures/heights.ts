@@ -26,32 +26,41 @@ export function transferFromTrace(trace: TraceResult): TransferJson {
 
 /** Heights shown: 0 to this multiple of the target's top (the automatic fan frames 1.5×). */
 const HEIGHT_HEADROOM = 1.6;
+/** Images narrower than this share of the elevation axis are shaded but not labelled (labels would overlap). */
+export const MIN_LABELLED_SHARE = 0.07;
+/** When the lowest height reached is above the target, the axis reaches this multiple of it. */
+const LOWEST_HEADROOM = 1.15;
 /** Rays up to which each ray is also drawn as a marker (beyond, markers cost more than they show). */
 const MARKER_LIMIT = 150;
 
 /** Builds the heights-at-the-target figure. */
 export function heightsFigure(transfer: TransferJson, options: HeightsFigureOptions): Figure {
-  const xMax = HEIGHT_HEADROOM * Math.max(options.target_height_m, 1);
   const rays = [...transfer.rays].sort((a, b) => a.elevation_deg - b.elevation_deg);
+  const reached = rays.filter((r) => r.height_m !== null).map((r) => r.height_m as number);
+  // Heights to the target's top and beyond; when even the lowest ray passes above it, far enough to show where the curve begins.
+  const xMax = Math.max(HEIGHT_HEADROOM * Math.max(options.target_height_m, 1), reached.length ? LOWEST_HEADROOM * Math.min(...reached) : 0);
   const x: (number | null)[] = [];
   const y: (number | null)[] = [];
   for (const ray of rays) {
     x.push(ray.height_m);
     y.push(ray.height_m === null ? null : ray.elevation_deg * ARCMIN_PER_DEG);
   }
-  // Elevations of the rays that land within the heights shown frame the y axis.
+  // The curve's own window frames the elevations when the findings give it; else the rays landing within the heights shown.
   const shown = rays.filter((r) => r.height_m !== null && r.height_m <= xMax).map((r) => r.elevation_deg * ARCMIN_PER_DEG);
   const all = rays.map((r) => r.elevation_deg * ARCMIN_PER_DEG);
-  const lo = Math.min(...(shown.length ? shown : all));
-  const hi = Math.max(...(shown.length ? shown : all));
-  const pad = 0.08 * (hi - lo || 1);
+  const frame = transfer.window ? [transfer.window.from_elevation_deg * ARCMIN_PER_DEG, transfer.window.to_elevation_deg * ARCMIN_PER_DEG] : shown.length ? shown : all;
+  const lo = Math.min(...frame);
+  const hi = Math.max(...frame);
+  const pad = 0.04 * (hi - lo || 1);
   const shapes: Partial<Shape>[] = [];
   const annotations: Record<string, unknown>[] = [];
   for (const image of transfer.images) {
     const y0 = Math.min(image.from_elevation_deg, image.to_elevation_deg) * ARCMIN_PER_DEG;
     const y1 = Math.max(image.from_elevation_deg, image.to_elevation_deg) * ARCMIN_PER_DEG;
     shapes.push({ type: 'rect', xref: 'paper', x0: 0, x1: 1, yref: 'y', y0, y1, fillcolor: image.orientation === 'erect' ? COLOURS.erect : COLOURS.inverted, line: { width: 0 }, layer: 'below' });
-    annotations.push({ xref: 'paper', x: 0.995, yref: 'y', y: (y0 + y1) / 2, text: image.orientation, showarrow: false, xanchor: 'right', font: { size: 10, color: COLOURS.muted } });
+    if (y1 - y0 >= MIN_LABELLED_SHARE * (hi - lo)) {
+      annotations.push({ xref: 'paper', x: 0.995, yref: 'y', y: (y0 + y1) / 2, text: image.orientation, showarrow: false, xanchor: 'right', font: { size: 10, color: COLOURS.muted } });
+    }
   }
   for (const band of transfer.hidden_bands) {
     shapes.push({ type: 'rect', xref: 'x', x0: band.from_height_m, x1: band.to_height_m, yref: 'paper', y0: 0, y1: 1, fillcolor: COLOURS.hidden, line: { width: 0 }, layer: 'below' });

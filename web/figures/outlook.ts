@@ -8,6 +8,8 @@
  * scale, 1 = as usual) and its image count; (3) the strength of the effect (bars, the label in the
  * hover text) with the air − sea temperature difference.
  */
+import type { Data, Layout } from 'plotly.js-dist-min';
+import { COLOURS, axis, baseLayout, type Figure } from './theme.js';
 
 /** The parts of an outlook row the chart reads (the server's OutlookRowJson has more). */
 export interface OutlookChartRow {
@@ -27,12 +29,6 @@ export interface OutlookChartInput {
   rows: OutlookChartRow[];
 }
 
-/** A Plotly figure as plain JSON. */
-export interface PlotlyFigure {
-  data: Record<string, unknown>[];
-  layout: Record<string, unknown>;
-}
-
 /** Options of outlookFigure; defaults in OUTLOOK_FIGURE_DEFAULTS. */
 export interface OutlookFigureOptions {
   /** Height of the whole figure, px. Default 720. */
@@ -43,15 +39,15 @@ export interface OutlookFigureOptions {
 
 export const OUTLOOK_FIGURE_DEFAULTS = Object.freeze({ height_px: 720 });
 
-/** Colours of the chart (our own palette). */
-const COLOURS = Object.freeze({
-  landmark: '#b4432c',
-  horizon: '#2c6fb4',
-  magnification: '#6a3d9a',
-  images: '#888888',
-  strength: '#e0a030',
-  airSea: '#1b7f6b',
-  zero: '#999999',
+/** Colours of the chart, from the viewer's palette (theme.ts). */
+const PALETTE = Object.freeze({
+  landmark: COLOURS.target,
+  horizon: COLOURS.horizon,
+  magnification: COLOURS.threshold,
+  images: COLOURS.muted,
+  strength: COLOURS.skyHigh,
+  airSea: COLOURS.temperature,
+  unity: '#c9d2d8',
 });
 
 /**
@@ -72,35 +68,34 @@ function commonZone(rows: readonly OutlookChartRow[]): string {
  * The outlook chart.
  * @param result the outlook JSON (rows in time order).
  * @param options height and title (OutlookFigureOptions).
- * @returns a Plotly figure { data, layout } (plain JSON).
+ * @returns a Plotly figure { data, layout } (plain JSON; the viewer's fonts and palette).
  */
-export function outlookFigure(result: OutlookChartInput, options: OutlookFigureOptions = {}): PlotlyFigure {
+export function outlookFigure(result: OutlookChartInput, options: OutlookFigureOptions = {}): Figure {
   const rows = result.rows;
   const x = rows.map((r) => wallClock(r.time));
   const zone = commonZone(rows);
   const landmarkName = result.site.landmark.name ?? 'landmark';
   const hover = rows.map((r) => `${r.label} (strength ${r.strength.toFixed(2)})`);
-  const data: Record<string, unknown>[] = [
-    { type: 'scatter', mode: 'lines+markers', name: `${landmarkName}: top seen higher (+) / lower (−)`, x, y: rows.map((r) => r.landmark_shift_arcmin), line: { color: COLOURS.landmark }, connectgaps: false, xaxis: 'x', yaxis: 'y', text: hover, hovertemplate: '%{y:.2f}′<br>%{text}<extra></extra>' },
-    { type: 'scatter', mode: 'lines', name: 'horizon seen higher (+) / lower (−)', x, y: rows.map((r) => r.horizon_shift_arcmin), line: { color: COLOURS.horizon, dash: 'dash' }, xaxis: 'x', yaxis: 'y', hovertemplate: 'horizon %{y:.2f}′<extra></extra>' },
-    { type: 'scatter', mode: 'lines+markers', name: 'vertical magnification', x, y: rows.map((r) => (r.landmark_magnification !== null && r.landmark_magnification > 0 ? r.landmark_magnification : null)), line: { color: COLOURS.magnification }, xaxis: 'x', yaxis: 'y2', hovertemplate: '×%{y:.2f}<extra></extra>' },
-    { type: 'scatter', mode: 'lines', name: 'magnification 1 (as usual)', x: [x[0], x[x.length - 1]], y: [1, 1], line: { color: COLOURS.zero, width: 1, dash: 'dot' }, xaxis: 'x', yaxis: 'y2', hoverinfo: 'skip', showlegend: false },
-    { type: 'scatter', mode: 'lines', name: 'images of the landmark (told apart)', x, y: rows.map((r) => r.resolvable_image_count), line: { color: COLOURS.images, shape: 'hv' }, xaxis: 'x', yaxis: 'y3', hovertemplate: '%{y} image(s)<extra></extra>' },
-    { type: 'bar', name: 'strength (0–1)', x, y: rows.map((r) => r.strength), marker: { color: COLOURS.strength }, text: rows.map((r) => r.label), xaxis: 'x', yaxis: 'y4', hovertemplate: '%{y:.2f}: %{text}<extra></extra>' },
-    { type: 'scatter', mode: 'lines', name: 'air − sea temperature, K', x, y: rows.map((r) => r.air_sea_difference_K), line: { color: COLOURS.airSea, width: 1.5 }, xaxis: 'x', yaxis: 'y5', hovertemplate: '%{y:.1f} K<extra></extra>' },
+  const data = [
+    { type: 'scatter', mode: 'lines+markers', name: `${landmarkName}: top seen higher (+) / lower (−)`, x, y: rows.map((r) => r.landmark_shift_arcmin), line: { color: PALETTE.landmark }, connectgaps: false, xaxis: 'x', yaxis: 'y', text: hover, hovertemplate: '%{y:.2f}′<br>%{text}<extra></extra>' },
+    { type: 'scatter', mode: 'lines', name: 'horizon seen higher (+) / lower (−)', x, y: rows.map((r) => r.horizon_shift_arcmin), line: { color: PALETTE.horizon, dash: 'dash' }, xaxis: 'x', yaxis: 'y', hovertemplate: 'horizon %{y:.2f}′<extra></extra>' },
+    { type: 'scatter', mode: 'lines+markers', name: 'vertical magnification', x, y: rows.map((r) => (r.landmark_magnification !== null && r.landmark_magnification > 0 ? r.landmark_magnification : null)), line: { color: PALETTE.magnification }, xaxis: 'x', yaxis: 'y2', hovertemplate: '×%{y:.2f}<extra></extra>' },
+    { type: 'scatter', mode: 'lines', name: 'magnification 1 (as usual)', x: [x[0], x[x.length - 1]], y: [1, 1], line: { color: PALETTE.unity, width: 1, dash: 'dot' }, xaxis: 'x', yaxis: 'y2', hoverinfo: 'skip', showlegend: false },
+    { type: 'scatter', mode: 'lines', name: 'images of the landmark (told apart)', x, y: rows.map((r) => r.resolvable_image_count), line: { color: PALETTE.images, shape: 'hv' }, xaxis: 'x', yaxis: 'y3', hovertemplate: '%{y} image(s)<extra></extra>' },
+    { type: 'bar', name: 'strength (0–1)', x, y: rows.map((r) => r.strength), marker: { color: PALETTE.strength }, text: rows.map((r) => r.label), xaxis: 'x', yaxis: 'y4', hovertemplate: '%{y:.2f}: %{text}<extra></extra>' },
+    { type: 'scatter', mode: 'lines', name: 'air − sea temperature, K', x, y: rows.map((r) => r.air_sea_difference_K), line: { color: PALETTE.airSea, width: 1.5 }, xaxis: 'x', yaxis: 'y5', hovertemplate: '%{y:.1f} K<extra></extra>' },
   ];
-  const layout: Record<string, unknown> = {
+  const layout = baseLayout({
     title: { text: options.title ?? result.site.name },
     height: options.height_px ?? OUTLOOK_FIGURE_DEFAULTS.height_px,
     hovermode: 'x unified',
-    legend: { orientation: 'h', y: -0.12 },
-    margin: { l: 70, r: 70, t: 60, b: 40 },
-    xaxis: { type: 'date', title: { text: zone ? `time (UTC${zone === 'Z' ? '' : zone})` : 'time (as written)' }, anchor: 'y4' },
-    yaxis: { domain: [0.62, 1], title: { text: 'seen higher, ′' }, zeroline: true, zerolinecolor: COLOURS.zero },
-    yaxis2: { domain: [0.33, 0.57], type: 'log', title: { text: 'magnification' } },
-    yaxis3: { overlaying: 'y2', side: 'right', title: { text: 'images' }, rangemode: 'tozero', dtick: 1, showgrid: false },
-    yaxis4: { domain: [0, 0.28], range: [0, 1], title: { text: 'strength' } },
-    yaxis5: { overlaying: 'y4', side: 'right', title: { text: 'air − sea, K' }, showgrid: false, zeroline: true },
-  };
-  return { data, layout };
+    margin: { l: 62, r: 62, t: 60, b: 46 },
+    xaxis: axis(zone ? `time (UTC${zone === 'Z' ? '' : zone})` : 'time (as written)', { type: 'date', anchor: 'y4' }),
+    yaxis: axis('seen higher, ′', { domain: [0.62, 1], zeroline: true }),
+    yaxis2: axis('magnification', { domain: [0.33, 0.57], type: 'log' }),
+    yaxis3: axis('images', { overlaying: 'y2', side: 'right', rangemode: 'tozero', dtick: 1, showgrid: false }),
+    yaxis4: axis('strength', { domain: [0, 0.28], range: [0, 1] }),
+    yaxis5: axis('air − sea, K', { overlaying: 'y4', side: 'right', showgrid: false, zeroline: true }),
+  } as Partial<Layout>);
+  return { data: data as Data[], layout };
 }

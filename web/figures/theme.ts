@@ -29,6 +29,15 @@ export const COLOURS = Object.freeze({
   erect: 'rgba(39, 158, 122, 0.16)',
   inverted: 'rgba(230, 145, 56, 0.22)',
   hidden: 'rgba(93, 107, 117, 0.22)',
+  /** Classes of the simulated view. */
+  view: {
+    sky: '#cfe4f3',
+    sea: '#2e5873',
+    target: '#3a2f25',
+    duct: '#9db5c7',
+  } as Record<string, string>,
+  imageErect: '#27a07b',
+  imageInverted: '#e08a2e',
   fate: {
     target: '#23967a',
     surface: '#b8693e',
