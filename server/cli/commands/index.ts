@@ -3,9 +3,19 @@ import type { Command } from 'commander';
 import { registerEnsemble } from './ensemble.js';
 import { registerProfile } from './profile.js';
 import { registerSighting } from './sighting.js';
+import { registerHorizon } from './horizon.js';
+import { registerTransfer } from './transfer.js';
+import { registerVisibility } from './visibility.js';
+import { registerRefraction } from './refraction.js';
+import { registerFindings } from './findings.js';
 
 export function registerCommands(program: Command): void {
   registerProfile(program);
   registerEnsemble(program);
   registerSighting(program);
+  registerHorizon(program);
+  registerTransfer(program);
+  registerVisibility(program);
+  registerRefraction(program);
+  registerFindings(program);
 }
