@@ -51,3 +51,21 @@ export function sensitivityWords(ranked: readonly RankedInput[], output: 'hidden
   if (rest.length > 0) lines.push(`Little difference (|rank correlation| < ${NEGLIGIBLE_RHO}): ${rest.map((r) => r.label).join(', ')}.`);
   return lines;
 }
+
+const arcmin = (deg: number) => `${(deg * 60).toFixed(1)}′`;
+
+/** "The sea horizon appeared at −2.1′ (median; 5–95 %: …) and the target's top at …" (inputs in degrees). */
+export function elevationWords(horizon_deg: Percentiles | null, top_deg: Percentiles | null, seeTop: number, count: number): string {
+  if (!horizon_deg) return '';
+  const band = (p: Percentiles) => `${arcmin(p.p50)} (median; 5–95 %: ${arcmin(p.p5)} … ${arcmin(p.p95)})`;
+  const top = top_deg ? ` and the target's top at ${band(top_deg)} in the ${seeTop} of ${count} runs that see it` : '';
+  return `Seen from the eye, the sea horizon lay at ${band(horizon_deg)} above the horizontal${top} (arcminutes; negative: below the horizontal).`;
+}
+
+/** "Approaching, its top was first seen at 24.1 km (median; 5–95 %: …)" for the ensemble's sighting ranges. */
+export function sightingWords(s: { top: Percentiles | null; light: Percentiles | null; whole: Percentiles | null } | null): string {
+  if (!s) return '';
+  const km = (m: number) => `${(m / 1000).toFixed(1)} km`;
+  const part = (what: string, p: Percentiles | null) => (p ? `${what} ${km(p.p50)} (5–95 %: ${km(p.p5)} … ${km(p.p95)})` : `${what} never`);
+  return `Along the line of sight, the target's top was first seen at ${part('', s.top).trim()}, its light at ${part('', s.light).trim()} and its whole height at ${part('', s.whole).trim()} (median over the runs; the outermost range at which each is seen).`;
+}

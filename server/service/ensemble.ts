@@ -14,7 +14,7 @@ import { InputError, InputRangeError } from '../../sim/errors.js';
 import { ensembleInputs, memberFile } from '../ensemble/inputs.js';
 import { runMemberTasks } from '../ensemble/pool.js';
 import { toCsv, type CsvRow } from '../ensemble/csv.js';
-import { hiddenHeightWords, probabilityWords, sensitivityWords } from '../ensemble/words.js';
+import { elevationWords, hiddenHeightWords, probabilityWords, sensitivityWords, sightingWords } from '../ensemble/words.js';
 import { convertScenario } from '../scenario/convert.js';
 import type { ScenarioFile } from '../scenario/schema.js';
 
@@ -181,8 +181,10 @@ export async function runEnsemble(file: ScenarioFile, options: EnsembleOptions =
     summary: [
       probabilityWords(summary.members, method, settings.seed, summary.probabilities, summary.standard_errors),
       hiddenHeightWords(summary.hidden_height_m),
+      elevationWords(degPercentiles(summary.horizon_elevation_rad), degPercentiles(summary.top_elevation_rad), rows.filter((r) => r.top_elevation_deg !== null).length, summary.members),
+      sightingWords(summary.sighting_range_m),
       ...sensitivityWords(sensitivity, summary.sensitivity_output),
-    ],
+    ].filter((line) => line !== ''),
     member_rows: rows,
     warnings,
   };
