@@ -2,6 +2,7 @@
 import type { Command } from 'commander';
 import { registerEnsemble } from './ensemble.js';
 import { registerProfile } from './profile.js';
+import { registerReport } from './report.js';
 import { registerSighting } from './sighting.js';
 import { registerHorizon } from './horizon.js';
 import { registerTransfer } from './transfer.js';
@@ -12,6 +13,7 @@ import { registerFindings } from './findings.js';
 export function registerCommands(program: Command): void {
   registerProfile(program);
   registerEnsemble(program);
+  registerReport(program);
   registerSighting(program);
   registerHorizon(program);
   registerTransfer(program);
