@@ -33,6 +33,19 @@ export const HTTP_LIMITS = Object.freeze({
   steps_per_ray: 20_000,
   /** Most elevations in a refraction list sent to findings (`refraction_elevations_deg`). */
   refraction_elevations: 100,
+  /** Most bodies (Sun, Moon: true elevations) in one findings request (`bodies_deg`). */
+  bodies: 10,
+  /** Most rays of the first fan of a findings request's transfer curve (`rays`; it refines itself beyond). */
+  transfer_rays: 2001,
+  /** Most cells of a simulated view (`rows` × `columns`); a cell costs no ray, a row costs one. */
+  view_cells: 250_000,
+  /** Most rows or columns of a simulated view. */
+  view_side: 1000,
+  /**
+   * Longest computation of one request, ms. Past it the worker computing it is stopped and the
+   * answer is 503 (only with a worker pool; without one the limits above bound the work).
+   */
+  compute_ms: 30_000,
 });
 
 export type HttpLimits = typeof HTTP_LIMITS;

@@ -1,0 +1,70 @@
+/**
+ * Where the HTTP API computes: a piscina pool of worker threads (one per core by default), so the
+ * event loop stays free for other requests, several requests compute at once, and a request that
+ * runs past HTTP_LIMITS.compute_ms is stopped (its worker ended) and answered 503. With
+ * `workers: 0` tasks run in the main thread (no time limit; the size limits still bound the work).
+ */
+import { availableParallelism } from 'node:os';
+import { Piscina } from 'piscina';
+import compute, { type ComputeAnswer, type ComputeTask } from './compute-worker.js';
+import { HttpError } from './errors.js';
+
+/** The worker module as piscina loads it: compute-worker.ts under the tsx loader. */
+const WORKER_URL = new URL('./compute-worker.ts', import.meta.url).href;
+const TSX_LOADER = import.meta.resolve('tsx');
+/** Idle worker threads above minThreads end after this long, ms (all threads are kept: minThreads = workers). */
+const IDLE_TIMEOUT_MS = 10 * 60_000;
+
+/** Runs compute tasks. */
+export interface ComputePool {
+  /** Worker threads (0: the main thread). */
+  readonly workers: number;
+  /** Runs a task; resolves with its answer; rejects with HttpError(503) past the time limit. */
+  run(task: ComputeTask): Promise<ComputeAnswer>;
+  /** Starts every worker thread and loads the services in it (the first task otherwise waits for that). */
+  warm(task: ComputeTask): Promise<void>;
+  /** Ends the worker threads. */
+  close(): Promise<void>;
+}
+
+/** Default worker threads: the cores Node reports. */
+export function defaultComputeWorkers(): number {
+  return availableParallelism();
+}
+
+/**
+ * Creates the pool.
+ * @param workers worker threads, 0..64 (0: compute in the main thread).
+ * @param timeout_ms longest computation of one task, ms (ignored without workers).
+ */
+export function createComputePool(workers: number, timeout_ms: number): ComputePool {
+  if (workers === 0) {
+    return { workers, run: async (task) => compute(task), warm: async (task) => void compute(task), close: async () => {} };
+  }
+  const pool = new Piscina<ComputeTask, ComputeAnswer>({
+    filename: WORKER_URL,
+    execArgv: ['--import', TSX_LOADER],
+    minThreads: workers,
+    maxThreads: workers,
+    idleTimeout: IDLE_TIMEOUT_MS,
+  });
+  return {
+    workers,
+    async run(task) {
+      const signal = AbortSignal.timeout(timeout_ms);
+      try {
+        return await pool.run(task, { signal });
+      } catch (error) {
+        if (signal.aborted) {
+          throw new HttpError(503, [{ field: '', message: `the computation took longer than the server allows (${timeout_ms / 1000} s per request) and was stopped; ask for fewer rays, fewer cells or a shorter range` }]);
+        }
+        throw error;
+      }
+    },
+    async warm(task) {
+      // One task per thread at once: piscina gives each idle thread one.
+      await Promise.all(Array.from({ length: workers }, () => pool.run(task)));
+    },
+    close: () => pool.destroy(),
+  };
+}
