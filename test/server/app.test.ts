@@ -144,6 +144,16 @@ describe('POST /api/view', () => {
   });
 });
 
+describe('POST /api/ensemble (mounted from server/http/routes/ensemble.ts)', () => {
+  it('streams the ensemble result as NDJSON', async () => {
+    const scenario = { ...INVERSION, observer: { height_m: { uniform: { min: 5, max: 7 } } }, optics: { index_model: 'none' } };
+    const res = await request(app).post('/api/ensemble').send({ scenario, members: 3, seed: 1 }).expect(200);
+    const last = JSON.parse(res.text.trim().split('\n').at(-1) as string);
+    expect(last.type).toBe('result');
+    expect(last.result.members).toBe(3);
+  });
+});
+
 describe('the viewer and unknown routes', () => {
   beforeAll(async () => {
     await ensureViewerBundle();
