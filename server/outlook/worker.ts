@@ -1,0 +1,16 @@
+/**
+ * The outlook's pool worker (piscina): computes one row. Runs in a worker thread that loads
+ * TypeScript through tsx (pool.ts passes `--import tsx`); pure computation, no I/O.
+ */
+import { outlookForObservation, type OutlookFinding, type OutlookObservation, type OutlookSite } from '../../sim/analysis/outlook.js';
+
+/** One task: an observation and its site (plain data, structured-cloned into the worker). */
+export interface OutlookTask {
+  observation: OutlookObservation;
+  site: OutlookSite;
+}
+
+/** Computes one row's finding (plain data, cloned back to the caller). */
+export default function computeOutlookRow(task: OutlookTask): OutlookFinding {
+  return outlookForObservation(task.observation, task.site);
+}
