@@ -1,6 +1,7 @@
 /** Registers every command of the CLI. */
 import type { Command } from 'commander';
 import { registerEnsemble } from './ensemble.js';
+import { registerOutlook } from './outlook.js';
 import { registerProfile } from './profile.js';
 import { registerReport } from './report.js';
 import { registerSighting } from './sighting.js';
@@ -12,6 +13,7 @@ import { registerFindings } from './findings.js';
 
 export function registerCommands(program: Command): void {
   registerProfile(program);
+  registerOutlook(program);
   registerEnsemble(program);
   registerReport(program);
   registerSighting(program);
