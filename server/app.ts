@@ -14,6 +14,7 @@
  *   POST /api/trace             a fan of rays (DESIGN.md §6 trace)
  *   POST /api/findings          horizon, transfer, visibility, refraction (DESIGN.md §6), with the caution
  *   POST /api/view              the simulated view toward the target (grid of sky / sea / target / duct)
+ *   POST /api/outlook, GET /api/outlook/demo   the mirage outlook of a series at a site (server/http/outlook.ts)
  *   POST /api/ensemble          an ensemble, progress streamed as NDJSON (server/http/routes/ensemble.ts)
  *   POST /api/report            the HTML report as an attachment (same file)
  * Errors: JSON { error: { field, message, problems, issues } }; 400 bad input, 404 unknown
@@ -28,6 +29,7 @@ import { HTTP_LIMITS } from './http/limits.js';
 import { createComputePool, defaultComputeWorkers } from './http/compute-pool.js';
 import { computeRoutes } from './http/routes/compute.js';
 import { ensembleRoutes } from './http/routes/ensemble.js';
+import { outlookRoutes } from './http/outlook.js';
 import { metaRoutes } from './http/routes/meta.js';
 import { scenarioRoutes } from './http/routes/scenarios.js';
 import { loadScenarioFile } from './scenario/load.js';
@@ -104,6 +106,7 @@ export function createApp(options: AppOptions = {}): LoomlineApp {
   api.use(metaRoutes(VERSION, Date.now()));
   api.use(scenarioRoutes(settings.profilesDir, settings.defaultScenarioId));
   api.use(computeRoutes(pool));
+  api.use(outlookRoutes());
   api.use(ensembleRoutes());
   api.use(notFound);
   app.use('/api', api);

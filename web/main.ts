@@ -12,6 +12,7 @@ import { AIR_KINDS, airKind, applyField, fieldSections, formatField, type AirKin
 import { airFigure } from './figures/air.js';
 import { heightsFigure } from './figures/heights.js';
 import { pathsFigure } from './figures/paths.js';
+import { mountOutlookPanel } from './outlook-panel.js';
 import { plotConfig, type Figure } from './figures/theme.js';
 import { viewFigure } from './figures/view.js';
 import { panelNotes, statusLine, summaryLines } from './summary.js';
@@ -258,6 +259,7 @@ async function loadFile(file: File): Promise<void> {
 }
 
 async function start(): Promise<void> {
+  mountOutlookPanel(document.querySelector<HTMLElement>('.panels')!);
   const form = byId('editor');
   form.addEventListener('input', (e) => onEdit(e, false));
   form.addEventListener('change', (e) => onEdit(e, true));
