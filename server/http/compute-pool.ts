@@ -48,6 +48,7 @@ export function createComputePool(workers: number, timeout_ms: number): ComputeP
     maxThreads: workers,
     idleTimeout: IDLE_TIMEOUT_MS,
   });
+  let closing = false;
   return {
     workers,
     async run(task) {
@@ -55,6 +56,7 @@ export function createComputePool(workers: number, timeout_ms: number): ComputeP
       try {
         return await pool.run(task, { signal });
       } catch (error) {
+        if (closing) throw new HttpError(503, [{ field: '', message: 'the server is stopping' }]);
         if (signal.aborted) {
           throw new HttpError(503, [{ field: '', message: `the computation took longer than the server allows (${timeout_ms / 1000} s per request) and was stopped; ask for fewer rays, fewer cells or a shorter range` }]);
         }
@@ -65,6 +67,9 @@ export function createComputePool(workers: number, timeout_ms: number): ComputeP
       // One task per thread at once: piscina gives each idle thread one.
       await Promise.all(Array.from({ length: workers }, () => pool.run(task)));
     },
-    close: () => pool.destroy(),
+    close: () => {
+      closing = true;
+      return pool.destroy();
+    },
   };
 }
