@@ -45,6 +45,7 @@ export function parseRequest<T>(schema: z.ZodType<T>, body: unknown): T {
 
 /** SI suffixes of sim/ error fields and the file-format suffixes they stand for. */
 const FILE_SUFFIXES: [RegExp, string][] = [
+  [/^target\.outline_m\b/, 'target.outline'],
   [/temperature_K$/, 'temperature_C'],
   [/pressure_Pa$/, 'pressure_hPa'],
   [/wavelength_um$/, 'wavelength_nm'],

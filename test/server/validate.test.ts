@@ -9,6 +9,7 @@ describe('scenarioField', () => {
     expect(scenarioField('atmosphere.surface_pressure_Pa')).toBe('scenario.atmosphere.surface_pressure_hPa');
     expect(scenarioField('optics.wavelength_um')).toBe('scenario.optics.wavelength_nm');
     expect(scenarioField('atmosphere.bulk.sea_temperature_K')).toBe('scenario.atmosphere.bulk.sea_temperature_C');
+    expect(scenarioField('target.outline_m')).toBe('scenario.target.outline');
   });
 
   it('keeps fields that are not part of a scenario, unless told they are', () => {

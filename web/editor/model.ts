@@ -196,5 +196,15 @@ export function applyField(scenario: ScenarioJson, spec: FieldSpec, text: string
   else if (spec.kind === 'select' && spec.optional && text === '') parsed = { ok: true, value: undefined };
   else parsed = { ok: true, value: text };
   if (!parsed.ok) return { error: parsed.message };
-  return { scenario: setPath(scenario, spec.path, parsed.value) };
+  const next = setPath(scenario, spec.path, parsed.value);
+  if (spec.path === 'target.shape' && parsed.value === 'custom' && getPath(next, 'target.outline') === undefined) {
+    return { scenario: setPath(next, 'target.outline', startingOutline(getPath(next, 'target.height_m'))) };
+  }
+  return { scenario: next };
+}
+
+/** Outline offered when the user first picks a custom shape: a block as wide as half its height, m. */
+export function startingOutline(height: unknown): [number, number][] {
+  const h = typeof height === 'number' && height > 0 ? height : 10;
+  return [[0, 0], [0, h], [h / 2, h], [h / 2, 0]];
 }

@@ -39,6 +39,12 @@ describe('reading fields', () => {
     expect(applyField(SCENARIO, spec, '9 m')).toEqual({ error: '"9 m" is not a number' });
   });
 
+  it('starts a custom shape from a block as tall as the target when no outline is given', () => {
+    const spec = fieldSections(SCENARIO).flatMap((s) => s.fields).find((f) => f.path === 'target.shape')!;
+    const result = applyField(SCENARIO, spec, 'custom') as { scenario: Record<string, unknown> };
+    expect(getPath(result.scenario, 'target.outline')).toEqual([[0, 0], [0, 40], [20, 40], [20, 0]]);
+  });
+
   it('shows the wavelength only for optical index models and the outline only for a custom shape', () => {
     const paths = (s: object) => fieldSections(s as Record<string, unknown>).flatMap((x) => x.fields).map((f) => f.path);
     expect(paths(SCENARIO)).toContain('optics.wavelength_nm');
