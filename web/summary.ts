@@ -24,7 +24,7 @@ const arcmin = (x: number): string => `${Math.abs(x).toFixed(1)}′`;
 /** The visibility verdict and what qualifies it. */
 function targetLines(f: FindingsJson): SummaryLine[] {
   const v = f.visibility;
-  const what = `The ${m(f.target_height_m)} ${SHAPE_WORDS[f.target_shape ?? ''] ?? 'target'} ${km(f.range_m)} away`;
+  const what = `Seen from an eye ${m(f.observer_height_m)} up, the ${m(f.target_height_m)} ${SHAPE_WORDS[f.target_shape ?? ''] ?? 'target'} ${km(f.range_m)} away`;
   const lines: SummaryLine[] = [];
   if (v.status === 'visible') lines.push({ kind: 'verdict', text: `${what} is in full view.` });
   else if (v.status === 'hidden') lines.push({ kind: 'verdict', text: `${what} is hidden: no line of sight from the eye reaches any of it.` });
@@ -67,7 +67,7 @@ export function summaryLines(data: PanelData): SummaryLine[] {
   const side = h.horizon_elevation_deg < 0 ? 'below' : 'above';
   lines.push({
     kind: 'fact',
-    text: `The ${h.false_horizon ? 'apparent horizon' : "sea's edge"} lies ${arcmin(h.horizon_elevation_deg * 60)} ${side} the horizontal, ${distance}; along straight lines of sight the sea's edge would lie ${arcmin(h.geometry.dip_arcmin)} below it.`,
+    text: `The ${h.false_horizon ? 'apparent horizon' : "sea's edge"} lies ${arcmin(h.horizon_elevation_deg * 60)} ${side} the horizontal, ${distance}; along straight lines of sight the sea's edge would lie ${arcmin(h.geometry.dip_arcmin)} below the horizontal.`,
   });
   if (h.false_horizon) {
     lines.push({ kind: 'fact', text: `That horizon is a false one: light grazes the top of a duct at ${m(h.grazing_height_m)}, so the visible sea ends before its true edge.` });
