@@ -23,7 +23,7 @@ export function horizonText(h: HorizonJson): string {
     : 'the sea’s edge';
   const pairs: [string, string | number | boolean | null][] = [
     ['apparent horizon', `${arcminText(h.horizon_elevation_deg)} (${h.horizon_elevation_deg < 0 ? 'below' : 'above'} the horizontal; ${where})`],
-    ['dip', `${fixed(h.dip_arcmin, 3)}′`],
+    ['dip', h.dip_arcmin >= 0 ? `${fixed(h.dip_arcmin, 3)}′` : `${signed(h.dip_arcmin, 3)}′ (the horizon is raised)`],
     ['distance to it', h.horizon_distance_m === null ? 'reached only asymptotically' : km(h.horizon_distance_m)],
     ['straight lines', `dip ${fixed(h.geometry.dip_arcmin, 3)}′, distance ${km(h.geometry.horizon_distance_m)}`],
     ['US 1976 air', h.standard ? `dip ${fixed(h.standard.dip_arcmin, 3)}′, distance ${h.standard.horizon_distance_m === null ? '—' : km(h.standard.horizon_distance_m)}` : '—'],
