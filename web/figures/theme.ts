@@ -73,6 +73,8 @@ export function plotConfig(filename: string): Partial<Config> {
   return {
     responsive: true,
     displaylogo: false,
+    // No "share to the cloud" button: nothing leaves this machine.
+    showSendToCloud: false,
     modeBarButtonsToRemove: ['select2d', 'lasso2d'],
     toImageButtonOptions: { format: 'png', filename: `loomline-${filename}`, scale: 2 },
   };
