@@ -104,6 +104,7 @@ export function mountOutlookPanel(container: HTMLElement): void {
 
 /** Plotly.react's arguments after the element: data, layout and the shared config. */
 function figureParts(result: OutlookChartInput): [PlotlyT.Data[], Partial<PlotlyT.Layout>, Partial<PlotlyT.Config>] {
-  const figure = outlookFigure(result, { height_px: PANEL_HEIGHT_PX });
+  // The panel's heading names the outlook; the chart needs no title of its own here.
+  const figure = outlookFigure(result, { height_px: PANEL_HEIGHT_PX, title: '' });
   return [figure.data, figure.layout, plotConfig('outlook')];
 }

@@ -25,13 +25,13 @@ describe('the outlook chart', () => {
 
   it('draws each row’s numbers as given, gaps where the landmark is not seen', () => {
     const figure = outlookFigure(RESULT);
-    const traces = figure.data as unknown as { name: string; y: unknown[]; text?: unknown[] }[];
+    const traces = figure.data as unknown as { name: string; y: unknown[]; customdata?: unknown[] }[];
     const trace = (name: RegExp) => traces.find((t) => name.test(t.name))!;
     expect(trace(/top seen higher/).y).toEqual([5.7, null]);
     expect(trace(/^horizon/).y).toEqual([7.8, -0.1]);
     expect(trace(/^vertical magnification/).y).toEqual([0.7, null]);
     expect(trace(/^strength/).y).toEqual([0.95, 0]);
-    expect(trace(/^strength/).text).toEqual(['lifted', '</script><b>']);
+    expect(trace(/^strength/).customdata).toEqual(['lifted', '</script><b>']);
     expect(trace(/told apart/).y).toEqual([1, 0]);
   });
 

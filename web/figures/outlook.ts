@@ -82,14 +82,15 @@ export function outlookFigure(result: OutlookChartInput, options: OutlookFigureO
     { type: 'scatter', mode: 'lines+markers', name: 'vertical magnification', x, y: rows.map((r) => (r.landmark_magnification !== null && r.landmark_magnification > 0 ? r.landmark_magnification : null)), line: { color: PALETTE.magnification }, xaxis: 'x', yaxis: 'y2', hovertemplate: '×%{y:.2f}<extra></extra>' },
     { type: 'scatter', mode: 'lines', name: 'magnification 1 (as usual)', x: [x[0], x[x.length - 1]], y: [1, 1], line: { color: PALETTE.unity, width: 1, dash: 'dot' }, xaxis: 'x', yaxis: 'y2', hoverinfo: 'skip', showlegend: false },
     { type: 'scatter', mode: 'lines', name: 'images of the landmark (told apart)', x, y: rows.map((r) => r.resolvable_image_count), line: { color: PALETTE.images, shape: 'hv' }, xaxis: 'x', yaxis: 'y3', hovertemplate: '%{y} image(s)<extra></extra>' },
-    { type: 'bar', name: 'strength (0–1)', x, y: rows.map((r) => r.strength), marker: { color: PALETTE.strength }, text: rows.map((r) => r.label), xaxis: 'x', yaxis: 'y4', hovertemplate: '%{y:.2f}: %{text}<extra></extra>' },
+    { type: 'bar', name: 'strength (0–1)', x, y: rows.map((r) => r.strength), marker: { color: PALETTE.strength }, customdata: rows.map((r) => r.label), textposition: 'none', xaxis: 'x', yaxis: 'y4', hovertemplate: '%{y:.2f}: %{customdata}<extra></extra>' },
     { type: 'scatter', mode: 'lines', name: 'air − sea temperature, K', x, y: rows.map((r) => r.air_sea_difference_K), line: { color: PALETTE.airSea, width: 1.5 }, xaxis: 'x', yaxis: 'y5', hovertemplate: '%{y:.1f} K<extra></extra>' },
   ];
   const layout = baseLayout({
-    title: { text: options.title ?? result.site.name },
+    title: { text: options.title ?? result.site.name, y: 0.99, yanchor: 'top' },
     height: options.height_px ?? OUTLOOK_FIGURE_DEFAULTS.height_px,
     hovermode: 'x unified',
-    margin: { l: 62, r: 62, t: 60, b: 46 },
+    legend: { orientation: 'h', x: 0, y: -0.12, yanchor: 'top', font: { size: 11 } },
+    margin: { l: 62, r: 62, t: 40, b: 110 },
     xaxis: axis(zone ? `time (UTC${zone === 'Z' ? '' : zone})` : 'time (as written)', { type: 'date', anchor: 'y4' }),
     yaxis: axis('seen higher, ′', { domain: [0.62, 1], zeroline: true }),
     yaxis2: axis('magnification', { domain: [0.33, 0.57], type: 'log' }),
