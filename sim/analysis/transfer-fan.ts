@@ -80,7 +80,8 @@ export function refinedFan(probe: RangeProbe, window: ElevationWindow, maxHeight
 
   let samples: RangeSample[] = [];
   for (let i = 0; i < rays; i++) {
-    samples.push(probe.probe(window.from_rad + ((window.to_rad - window.from_rad) * i) / (rays - 1)));
+    // The last ray exactly at the window's top (the formula can round past it, and past the tracer's 80°).
+    samples.push(probe.probe(i === rays - 1 ? window.to_rad : window.from_rad + ((window.to_rad - window.from_rad) * i) / (rays - 1)));
   }
   const criteria = { step, minSpacing, maxHeight_m, range_m: probe.range_m };
   let pass = 0;

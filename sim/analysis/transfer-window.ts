@@ -20,6 +20,7 @@
  *   the first and last rays of the fan lie safely outside the curve that matters.
  */
 import { RAD_PER_DEG } from '../constants.js';
+import { MAX_ELEVATION_RAD } from '../trace/options.js';
 import { angleBelowEye } from './dip.js';
 import { InvariantProfile } from './invariant.js';
 import type { RangeProbe } from './range-probe.js';
@@ -30,7 +31,7 @@ export const WINDOW_MARGIN_MIN_RAD = 0.01 * RAD_PER_DEG;
 /** Margin added at each end of the window as a fraction of its width (10 %). */
 export const WINDOW_MARGIN_FRACTION = 0.1;
 /** Steepest elevation the window may reach, rad (the tracer's 80° limit, sim/trace/options.ts). */
-export const WINDOW_LIMIT_RAD = 80 * RAD_PER_DEG;
+export const WINDOW_LIMIT_RAD = MAX_ELEVATION_RAD;
 /** First step when the window must be widened, rad (0.05°); it doubles at each further step. */
 const WIDEN_STEP_RAD = 0.05 * RAD_PER_DEG;
 

@@ -81,7 +81,12 @@ export const MAX_HEIGHT_LIMIT_M = 100_000;
  * @param options maxHeight_m (required), Earth radius, window, fan density (FanOptions).
  * @returns the curve, its folds, fate boundaries, images, lowest visible height and hidden bands.
  * Accuracy: heights as the tracer (about 2e-5 m at 50 km); image boundaries in elevation to better
- * than 1e-4° (see the module comment). Validity: a stratified atmosphere over a sphere.
+ * than 1e-4° (see the module comment). An image end at a fate boundary where the rays just clear a
+ * corner of n·r (a duct top on a profile node) is good to about 1 mm only: there the height at the
+ * target range grows like the square root of the distance from the boundary, so the 1e-12 rad
+ * bracket leaves L·√(2·sin α·1e-12) of height (L the remaining range). Elevations are limited to
+ * the tracer's ±80°: a warning says when heights below maxHeight_m lie beyond that.
+ * Validity: a stratified atmosphere over a sphere.
  * @throws InputRangeError naming observerHeight_m, range_m, maxHeight_m, earthRadius_m, rays,
  *   heightStep_m, minSpacing_rad, boundaryTolerance_rad, maxRays or window.
  * Reference: DESIGN.md §6–7; images and folds as in Young & Kattawar (1998), Appl. Opt. 37
