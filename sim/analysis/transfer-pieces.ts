@@ -67,7 +67,7 @@ export const BASE_RANGE_TOLERANCE_M = 1;
  * @param probe traces rays (the fine probe refines each fold).
  * @param samples the refined fan, sorted by elevation.
  * @param boundaries its fate boundaries.
- * @returns folds (sorted) and pieces (sorted by elevation), and the fold samples added.
+ * @returns folds (sorted by elevation) and pieces (sorted by elevation; a fold ends one piece and starts the next).
  */
 export function transferPieces(probe: RangeProbe, samples: RangeSample[], boundaries: FanBoundary[]): { folds: Fold[]; pieces: TransferPiece[] } {
   const limit = new Map<RangeSample, number>();
