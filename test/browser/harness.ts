@@ -36,8 +36,8 @@ export interface Viewer {
   baseUrl: string;
   /**
    * Problems the page reported (console errors, uncaught exceptions, failed requests), except
-   * Chromium's console line for a 400 answer: the server answers invalid scenarios with 400 by
-   * design and the page shows the problem beside the field.
+   * Chromium's console line for a 400 answer (the server answers invalid scenarios with 400 by
+   * design and the page shows the problem beside the field) and requests the page aborted itself.
    */
   pageErrors: string[];
   close(): Promise<void>;
@@ -74,7 +74,10 @@ export async function openPage(viewer: Viewer, scenarioId?: string, size = { wid
     if (m.type() === 'error' && !EXPECTED_CONSOLE_ERROR.test(m.text())) viewer.pageErrors.push(`console: ${m.text()}`);
   });
   page.on('pageerror', (e) => viewer.pageErrors.push(`page: ${e.message}`));
-  page.on('requestfailed', (r) => viewer.pageErrors.push(`request failed: ${r.url()}`));
+  page.on('requestfailed', (r) => {
+    // The page aborts requests it no longer needs (a newer edit, a stopped run): not a failure.
+    if (r.failure()?.errorText !== 'net::ERR_ABORTED') viewer.pageErrors.push(`request failed: ${r.url()} (${r.failure()?.errorText})`);
+  });
   await page.goto(`${viewer.baseUrl}/${scenarioId ? `?scenario=${scenarioId}` : ''}`);
   await page.waitForSelector('body[data-ready]', { timeout: READY_TIMEOUT_MS });
   return page;

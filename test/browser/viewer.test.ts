@@ -18,9 +18,13 @@ afterAll(async () => {
   await viewer?.close();
 });
 
+/** The plots of the scenario panels (other panels, such as the outlook, draw on request). */
+const SCENARIO_PLOTS = ['plot-air', 'plot-heights', 'plot-paths', 'plot-view'];
+const SCENARIO_PLOTS_SELECTOR = SCENARIO_PLOTS.map((id) => `#${id}`).join(', ');
+
 /** Number of plotted points per plot div (Plotly keeps the data on the div). */
 async function plottedPoints(page: Page): Promise<Record<string, number>> {
-  return page.$$eval('.plot', (divs) =>
+  return page.$$eval(SCENARIO_PLOTS_SELECTOR, (divs) =>
     Object.fromEntries(
       divs.map((div) => {
         const data = (div as unknown as { data?: { x?: unknown[]; z?: unknown[] }[] }).data ?? [];
@@ -48,7 +52,7 @@ describe('the viewer', () => {
     const page = await openPage(viewer);
     expect(await page.inputValue('#scenario-picker')).toBe('cold-channel-morning');
     const points = await plottedPoints(page);
-    expect(Object.keys(points).sort()).toEqual(['plot-air', 'plot-heights', 'plot-paths', 'plot-view'].sort());
+    expect(Object.keys(points).sort()).toEqual(SCENARIO_PLOTS);
     for (const [id, n] of Object.entries(points)) expect(n, id).toBeGreaterThan(10);
     expect(await page.textContent('#findings')).not.toBe('');
     expect(viewer.pageErrors).toEqual([]);
@@ -58,7 +62,7 @@ describe('the viewer', () => {
 
   it('offers a PNG download on every plot, and no button that sends anything away', async () => {
     const page = await openPage(viewer);
-    const titles = await page.$$eval('.plot', (divs) => divs.map((d) => [...d.querySelectorAll('.modebar-btn')].map((b) => b.getAttribute('data-title'))));
+    const titles = await page.$$eval(SCENARIO_PLOTS_SELECTOR, (divs) => divs.map((d) => [...d.querySelectorAll('.modebar-btn')].map((b) => b.getAttribute('data-title'))));
     expect(titles).toHaveLength(4);
     for (const list of titles) {
       expect(list).toContain('Download plot as a PNG');
