@@ -22,11 +22,18 @@ export const OUTLOOK_CSV_COLUMNS = [
   'landmark_elevation_arcmin',
   'lowest_visible_height_m',
   'reference_lowest_visible_height_m',
+  'hidden_bands',
 ] as const satisfies readonly (keyof OutlookRowJson)[];
 
-/** A CSV field: numbers to 6 significant digits, null empty, text quoted when it holds a comma, quote or line break. */
+/**
+ * A CSV field: numbers to 6 significant digits, null empty, height bands as "from-to" pairs in m
+ * joined by ";", text quoted when it holds a comma, quote or line break.
+ */
 function csvField(value: unknown): string {
   if (value === null || value === undefined) return '';
+  if (Array.isArray(value)) {
+    return (value as { from_height_m: number; to_height_m: number }[]).map((b) => `${csvField(b.from_height_m)}-${csvField(b.to_height_m)}`).join(';');
+  }
   if (typeof value === 'number') return Number.isFinite(value) ? String(Number(value.toPrecision(6))) : '';
   const text = String(value);
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
