@@ -72,10 +72,10 @@ export function mountEnsemblePanel(container: HTMLElement, scenario: () => unkno
   seedLabel.append(seed);
   form.append(membersLabel, seedLabel, run, stop, report);
   head.append(form);
-  const progress = element('progress', { id: 'ensemble-progress', max: '1', value: '0' });
+  const progress = element('progress', { id: 'ensemble-progress', max: '1', value: '0', style: 'width: 100%' });
   const status = element('p', { class: 'description', role: 'status', 'aria-live': 'polite' }, 'Give any number a distribution (normal, uniform or a list of values) in the scenario file, then run: the server samples it with a seeded generator.');
   const summary = element('ul', { class: 'description', id: 'ensemble-summary' });
-  const plot = element('div', { class: 'plot', id: 'plot-ensemble' });
+  const plot = element('div', { class: 'ensemble-plot', id: 'plot-ensemble' });
   panel.append(head, progress, status, summary, plot);
   container.append(panel);
 

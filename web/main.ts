@@ -15,6 +15,7 @@ import { pathsFigure } from './figures/paths.js';
 import { mountOutlookPanel } from './outlook-panel.js';
 import { plotConfig, type Figure } from './figures/theme.js';
 import { viewFigure } from './figures/view.js';
+import { mountEnsemblePanel } from './ensemble-panel.js';
 import { panelNotes, statusLine, summaryLines } from './summary.js';
 import { DEFAULT_VIEWER_RAYS, Session, type SessionUpdate } from './session.js';
 import type { Limits, ScenarioJson } from './types.js';
@@ -260,6 +261,7 @@ async function loadFile(file: File): Promise<void> {
 
 async function start(): Promise<void> {
   mountOutlookPanel(document.querySelector<HTMLElement>('.panels')!);
+  mountEnsemblePanel(document.querySelector('.panels') as HTMLElement, () => session.scenario);
   const form = byId('editor');
   form.addEventListener('input', (e) => onEdit(e, false));
   form.addEventListener('change', (e) => onEdit(e, true));

@@ -30,6 +30,7 @@ export function ensembleFigure(e: EnsembleChartInput): Figure {
     layout: {
       grid: { rows: 1, columns: 2, pattern: 'independent' },
       showlegend: false,
+      height: 320,
       margin: { l: 56, r: 16, t: 12, b: 48 },
       yaxis: { title: { text: 'probability, %' }, range: [0, 100] },
       xaxis2: { title: { text: 'hidden height at the target, m' } },

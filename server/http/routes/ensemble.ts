@@ -65,12 +65,11 @@ export function ensembleRoutes(): Router {
           if (finished % every === 0 || finished === total) send({ type: 'progress', finished, total });
         },
       });
-      if (!signal.aborted) send({ type: 'result', result });
+      res.end(signal.aborted ? undefined : JSON.stringify({ type: 'result', result }) + '\n');
     } catch (error) {
       const issues = error instanceof HttpError ? error.issues : [{ field: (error as { field?: string }).field ?? '', message: error instanceof Error ? error.message : String(error) }];
-      send({ type: 'error', ...errorBody(issues) });
+      res.end(JSON.stringify({ type: 'error', ...errorBody(issues) }) + '\n');
     }
-    res.end();
   });
 
   router.post('/report', async (req, res) => {
