@@ -113,6 +113,7 @@ export function ensembleText(r: EnsembleResult): string {
   ].join('\n');
 }
 
+/** Registers `ensemble <scenario>` (DESIGN.md §6) on the program. */
 export function registerEnsemble(program: Command): void {
   scenarioCommand<EnsembleCliOptions>(
     program,

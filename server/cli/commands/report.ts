@@ -39,6 +39,7 @@ async function exists(path: string): Promise<boolean> {
   );
 }
 
+/** Registers `report <scenario> --out <file>` on the program. */
 export function registerReport(program: Command): void {
   const cmd = program
     .command('report')

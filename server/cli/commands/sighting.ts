@@ -39,6 +39,7 @@ export function sightingText(r: SightingJson): string {
   ].join('\n');
 }
 
+/** Registers `sighting <scenario>` on the program. */
 export function registerSighting(program: Command): void {
   scenarioCommand<CommonOptions & SightingFlags>(
     program,

@@ -48,6 +48,7 @@ function clientGone(req: Request, res: Response): AbortSignal {
   return controller.signal;
 }
 
+/** The router of POST /api/ensemble and POST /api/report (mounted under /api). */
 export function ensembleRoutes(): Router {
   const router = Router();
 
