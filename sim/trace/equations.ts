@@ -131,6 +131,11 @@ export class RayEquations {
   /** dα/ds at z, rad/m, with dn/dz from below (below = true) or above a node. */
   elevationRate(z_m: number, below: boolean): number {
     this.sample(z_m, below);
+    return this.sampledElevationRate(z_m);
+  }
+
+  /** dα/ds at z from the last sample (which must be at z), rad/m. */
+  sampledElevationRate(z_m: number): number {
     return this.invR + ((1 + z_m * this.invR) * this.dndz_per_m) / (1 + this.nm1);
   }
 }

@@ -16,6 +16,8 @@ import type { TraceOptions } from './options.js';
 export const MAX_FAN_RAYS = 1_000_000;
 /** Most values rays × samplesPerRay in one fan (× 3 fields × 8 bytes = 480 MB). */
 export const MAX_FAN_SAMPLES = 20_000_000;
+/** Knots per ray to reserve room for (about 8 in the bench fan; the buffer grows if needed). */
+const KNOTS_PER_RAY_GUESS = 12;
 /** Field order of the last axis of FanResult.paths. */
 export const PATH_FIELDS = ['range_m', 'height_m', 'elevation_rad'] as const;
 
@@ -75,7 +77,7 @@ export function traceFan(table: IndexTable, observerHeight_m: number, elevations
   }
 
   const kernel = new RayKernel(table, settings);
-  const all = new KnotBuffer();
+  const all = new KnotBuffer(KNOTS_PER_RAY_GUESS * rays);
   const firstKnot = new Int32Array(rays + 1);
   const fate = new Uint8Array(rays);
   const endRange_m = new Float64Array(rays);
@@ -112,11 +114,15 @@ export function traceFan(table: IndexTable, observerHeight_m: number, elevations
     const base = k * samples * 3;
     const count = resampleKnots(all, firstKnot[k], firstKnot[k + 1] - firstKnot[k], spacing_m, samples, data, base);
     sampleCount[k] = count;
-    const last = base + 3 * (count - 1);
-    for (let o = base + 3 * count; o < base + 3 * samples; o += 3) {
-      data[o] = data[last];
-      data[o + 1] = data[last + 1];
-      data[o + 2] = data[last + 2];
+    // Repeat the last sample to the end of the row, doubling the copied block each time.
+    const end = base + 3 * samples;
+    let filled = base + 3 * count;
+    let block = 3;
+    while (filled < end) {
+      const n = Math.min(block, end - filled);
+      data.copyWithin(filled, filled - n, filled);
+      filled += n;
+      block *= 2;
     }
   }
   const warnings: string[] = [];

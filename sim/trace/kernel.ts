@@ -75,6 +75,9 @@ export class RayKernel {
   stepLimitReached = false;
 
   private recordKnots = false;
+  /** dz/ds and dα/ds at the last knot (the current state between steps). */
+  private knotSlope = 0;
+  private knotRate = 0;
   private readonly start = createOdeState(2);
   private readonly end = createOdeState(2);
   private readonly vertex = createOdeState(2);
@@ -167,11 +170,11 @@ export class RayKernel {
     const eq = this.equations;
     const end = this.settings.endRange_m;
     const z = st.y[0];
-    const a = st.y[1];
-    const tanA = Math.tan(a);
+    // dz/ds and dα/ds of the state, computed by addKnot just before.
+    const slope = this.knotSlope;
     const q = 1 + z / eq.earthRadius_m;
-    const slope = q * tanA;
-    const curvature = (q * tanA * tanA) / eq.earthRadius_m + q * (1 + tanA * tanA) * eq.elevationRate(z, a < 0);
+    const tanA = slope / q;
+    const curvature = (slope * tanA) / eq.earthRadius_m + q * (1 + tanA * tanA) * this.knotRate;
     const reach = st.dt;
     let ahead = Infinity;
     const up = nextLevel(this.levels, z, 1);
@@ -199,7 +202,9 @@ export class RayKernel {
     const eq = this.equations;
     const z = st.y[0];
     const a = st.y[1];
-    const c = eq.invariant(z, a);
+    const c = eq.invariant(z, a); // samples the medium at z on the side the ray moves into
+    this.knotRate = eq.sampledElevationRate(z);
+    this.knotSlope = eq.heightRate(z, a);
     const drift = Math.abs(c / this.invariant_m - 1);
     if (drift > this.maxInvariantDrift) this.maxInvariantDrift = drift;
     if (z < this.minHeight_m) {
@@ -207,9 +212,8 @@ export class RayKernel {
       this.minHeightRange_m = st.t;
     }
     if (!this.recordKnots) return;
-    const rateOut = eq.elevationRate(z, a < 0);
-    const rateIn = onKink ? eq.elevationRate(z, a > 0) : rateOut;
-    this.knots.push(st.t, z, a, eq.heightRate(z, a), rateIn, rateOut);
+    const rateIn = onKink ? eq.elevationRate(z, a > 0) : this.knotRate;
+    this.knots.push(st.t, z, a, this.knotSlope, rateIn, this.knotRate);
   }
 
   /**

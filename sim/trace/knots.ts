@@ -4,20 +4,29 @@
  * uniform range spacing for display. Resampled values between knots are accurate to O(h⁴) of the
  * step h: good for plots, not for analysis (analysis asks the tracer for exact values).
  */
-import { hermiteValue } from './hermite.js';
-
 /** Growable knot arrays, reused from ray to ray (no allocation once large enough). */
 export class KnotBuffer {
   count = 0;
-  range_m: Float64Array = new Float64Array(64);
-  height_m: Float64Array = new Float64Array(64);
-  elevation_rad: Float64Array = new Float64Array(64);
+  range_m: Float64Array;
+  height_m: Float64Array;
+  elevation_rad: Float64Array;
   /** dz/ds at the knot. */
-  heightRate: Float64Array = new Float64Array(64);
+  heightRate: Float64Array;
   /** dα/ds arriving at the knot (from the previous step's side of a kink), rad/m. */
-  elevationRateIn: Float64Array = new Float64Array(64);
+  elevationRateIn: Float64Array;
   /** dα/ds leaving the knot, rad/m. */
-  elevationRateOut: Float64Array = new Float64Array(64);
+  elevationRateOut: Float64Array;
+
+  /** @param capacity initial number of knots (the buffer doubles when full). */
+  constructor(capacity = 64) {
+    const size = Math.max(2, Math.ceil(capacity));
+    this.range_m = new Float64Array(size);
+    this.height_m = new Float64Array(size);
+    this.elevation_rad = new Float64Array(size);
+    this.heightRate = new Float64Array(size);
+    this.elevationRateIn = new Float64Array(size);
+    this.elevationRateOut = new Float64Array(size);
+  }
 
   clear(): void {
     this.count = 0;
@@ -36,9 +45,18 @@ export class KnotBuffer {
 
   /** Appends every knot of other. */
   append(other: KnotBuffer): void {
-    for (let k = 0; k < other.count; k++) {
-      this.push(other.range_m[k], other.height_m[k], other.elevation_rad[k], other.heightRate[k], other.elevationRateIn[k], other.elevationRateOut[k]);
+    const n = other.count;
+    while (this.count + n > this.range_m.length) this.grow();
+    const at = this.count;
+    for (let k = 0; k < n; k++) {
+      this.range_m[at + k] = other.range_m[k];
+      this.height_m[at + k] = other.height_m[k];
+      this.elevation_rad[at + k] = other.elevation_rad[k];
+      this.heightRate[at + k] = other.heightRate[k];
+      this.elevationRateIn[at + k] = other.elevationRateIn[k];
+      this.elevationRateOut[at + k] = other.elevationRateOut[k];
     }
+    this.count += n;
   }
 
   private grow(): void {
@@ -64,32 +82,43 @@ export class KnotBuffer {
  * maxSamples (the caller chooses a spacing that leaves room for the last knot).
  */
 export function resampleKnots(knots: KnotBuffer, first: number, count: number, spacing_m: number, maxSamples: number, out: Float64Array, offset: number): number {
-  const n = first + count;
+  const last = first + count - 1;
   const s = knots.range_m;
   const z = knots.height_m;
   const a = knots.elevation_rad;
-  const end = s[n - 1];
-  let k = first;
+  const end = s[last];
   let written = 0;
-  for (let j = 0; written < maxSamples - 1; j++) {
-    const sj = j * spacing_m;
-    if (!(sj < end)) break;
-    while (k < n - 2 && s[k + 1] <= sj) k++;
-    const o = offset + 3 * written++;
-    if (count === 1 || s[k + 1] === s[k]) {
+  let j = 0;
+  // Interval by interval: the cubic's power-basis coefficients in t = (range − s_k)/h once,
+  // then Horner for every sample that falls in it.
+  for (let k = first; k < last && written < maxSamples - 1; k++) {
+    const s0 = s[k];
+    const h = s[k + 1] - s0;
+    if (!(h > 0)) continue;
+    const invH = 1 / h;
+    const dz = z[k + 1] - z[k];
+    const mz0 = knots.heightRate[k] * h;
+    const mz1 = knots.heightRate[k + 1] * h;
+    const z2 = 3 * dz - 2 * mz0 - mz1;
+    const z3 = mz0 + mz1 - 2 * dz;
+    const da = a[k + 1] - a[k];
+    const ma0 = knots.elevationRateOut[k] * h;
+    const ma1 = knots.elevationRateIn[k + 1] * h;
+    const a2 = 3 * da - 2 * ma0 - ma1;
+    const a3 = ma0 + ma1 - 2 * da;
+    const limit = k + 1 === last ? end : s[k + 1];
+    for (let sj = j * spacing_m; sj < limit && written < maxSamples - 1; sj = ++j * spacing_m) {
+      const t = (sj - s0) * invH;
+      const o = offset + 3 * written++;
       out[o] = sj;
-      out[o + 1] = z[k];
-      out[o + 2] = a[k];
-      continue;
+      out[o + 1] = z[k] + t * (mz0 + t * (z2 + t * z3));
+      out[o + 2] = a[k] + t * (ma0 + t * (a2 + t * a3));
     }
-    out[o] = sj;
-    out[o + 1] = hermiteValue(s[k], z[k], knots.heightRate[k], s[k + 1], z[k + 1], knots.heightRate[k + 1], sj);
-    out[o + 2] = hermiteValue(s[k], a[k], knots.elevationRateOut[k], s[k + 1], a[k + 1], knots.elevationRateIn[k + 1], sj);
   }
   const o = offset + 3 * written++;
   out[o] = end;
-  out[o + 1] = z[n - 1];
-  out[o + 2] = a[n - 1];
+  out[o + 1] = z[last];
+  out[o + 2] = a[last];
   return written;
 }
 
