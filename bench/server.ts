@@ -67,7 +67,7 @@ function startServer(): Promise<{ child: ChildProcess; url: string }> {
 }
 
 export async function benchServer(): Promise<string[]> {
-  const load = loadavg()[0];
+  const startLoad = loadavg()[0];
   const { child, url } = await startServer();
   try {
     // One untimed request warms the JIT and the medium cache.
@@ -75,7 +75,7 @@ export async function benchServer(): Promise<string[]> {
     const eye = await load(url, (s, i) => (s.observer.height_m = 4 + 0.125 * i));
     const air = await load(url, (s, i) => (s.atmosphere.profile[0].temperature_C = 1 + 0.03125 * i));
     return [
-      `server: POST ${BENCH_ROUTE}, built-in scenario, ${CONNECTIONS} connections, server in its own process (${availableParallelism()} cores, load average ${load.toFixed(1)} at the start)`,
+      `server: POST ${BENCH_ROUTE}, built-in scenario, ${CONNECTIONS} connections, server in its own process (${availableParallelism()} cores, load average ${startLoad.toFixed(1)} at the start)`,
       describe('varied eye height (shared air)', eye),
       describe('varied surface temperature (air rebuilt)', air),
     ];

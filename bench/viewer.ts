@@ -72,7 +72,7 @@ function describe(label: string, timings: Timing[]): string {
 }
 
 export async function benchViewer(): Promise<string[]> {
-  const load = loadavg()[0];
+  const startLoad = loadavg()[0];
   const viewer = await startViewer();
   try {
     const page = await openPage(viewer);
@@ -83,7 +83,7 @@ export async function benchViewer(): Promise<string[]> {
     const node = await series(page, '[data-path="atmosphere.profile.1.temperature_C"]', (i) => (12 + 0.1 * ((i % 8) + 1)).toFixed(1));
     await page.close();
     return [
-      `viewer: ${rays} rays drawn (viewer default ${DEFAULT_VIEWER_RAYS}), built-in scenario, Chromium headless, server in the same machine (${availableParallelism()} cores, load average ${load.toFixed(1)} at the start)`,
+      `viewer: ${rays} rays drawn (viewer default ${DEFAULT_VIEWER_RAYS}), built-in scenario, Chromium headless, server in the same machine (${availableParallelism()} cores, load average ${startLoad.toFixed(1)} at the start)`,
       describe('eye-height edit', eye),
       describe('temperature-node edit', node),
       `viewer: typing waits ${EDIT_DEBOUNCE_MS} ms of quiet before the same work starts (Enter or leaving the field starts it at once)`,
