@@ -11,5 +11,6 @@ export { RayEquations } from './equations.js';
 export { OdeStepper, createOdeState } from './ode.js';
 export type { Derivative, OdeOptions, OdeState } from './ode.js';
 export { quadratureRange } from './quadrature.js';
+export { InvariantExcess } from './invariant-excess.js';
 export type { QuadratureOptions } from './quadrature.js';
 export { integrateAdaptive } from './gauss-kronrod.js';

@@ -10,13 +10,16 @@
  * a grazing ray is judged by its integrated lowest point, not by an interpolant. A crossing sends
  * the integrator back to the start of the step and re-integrates to the crossing (locate.ts).
  * At a kink the ray is put exactly on the node and integration restarts there, so no step spans a
- * kink and the step control sees the jump of dn/dz.
+ * kink and the step control sees the jump of dn/dz. To keep crossings rare and cheap, steps are
+ * aimed at the next level (levels.ts) and the equations continue the medium smoothly past the
+ * current pair of levels (equations.ts, setDomain).
  */
 import type { IndexTable } from '../refractivity/index-table.js';
 import { RayEquations } from './equations.js';
 import { hermiteCrossing, hermiteExtremum } from './hermite.js';
 import { KnotBuffer } from './knots.js';
 import { ELEVATION, HEIGHT, heightTolerance, locateEvent } from './locate.js';
+import { levelAim, nextLevel } from './levels.js';
 import { createOdeState, OdeStepper } from './ode.js';
 import type { TraceSettings } from './options.js';
 
@@ -34,17 +37,6 @@ export const FATE_TRAPPED = 3;
  * (a longer first guess is mostly rejected near a strong inversion, a shorter one costs steps).
  */
 const INITIAL_STEP_M = 200;
-
-/**
- * A step heading for a level stops at this fraction of the predicted distance; the next step, much
- * shorter, aims at the level itself with a prediction error of order (1 − fraction)³ smaller. A
- * step that straddles a kink by δ carries an error estimate of about jump(dα/ds)·δ·lever arm,
- * which exceeds the tolerance already for δ of a fraction of a millimetre in a strong inversion.
- */
-const LEVEL_APPROACH = 0.99;
-
-/** Below this many metres of predicted distance the step aims at the level directly. */
-const LEVEL_DIRECT_M = 1;
 
 /** Reusable ray integrator over one table and one set of settings. */
 export class RayKernel {
@@ -156,33 +148,10 @@ export class RayKernel {
     this.evaluations = eq.evaluations - firstEvaluation;
   }
 
-  /**
-   * Where the next step should stop: at the nearest level (above or below) that the ray is
-   * predicted to reach within the proposed step, by a quadratic in range from z, dz/ds and d²z/ds²;
-   * otherwise the end range. Aiming matters: a step that straddles a kink carries an error
-   * estimate far above the tolerance and the step control would creep up to the kink in many
-   * shrinking steps. The prediction is good to O(h³): the ray stops short (LEVEL_APPROACH), then
-   * aims at the level; a step that lands a hair short arrives after one more tiny step, one that
-   * crosses is located (locate.ts).
-   */
+  /** Where the next step should stop (see levelAim): the state's slopes come from the last knot. */
   private stepLimit(): number {
     const st = this.stepper;
-    const eq = this.equations;
-    const end = this.settings.endRange_m;
-    const z = st.y[0];
-    // dz/ds and dα/ds of the state, computed by addKnot just before.
-    const slope = this.knotSlope;
-    const q = 1 + z / eq.earthRadius_m;
-    const tanA = slope / q;
-    const curvature = (slope * tanA) / eq.earthRadius_m + q * (1 + tanA * tanA) * this.knotRate;
-    const reach = st.dt;
-    let ahead = Infinity;
-    const up = nextLevel(this.levels, z, 1);
-    if (up >= 0) ahead = firstPositiveRoot(0.5 * curvature, slope, z - this.levels[up]);
-    const down = nextLevel(this.levels, z, -1);
-    if (down >= 0) ahead = Math.min(ahead, firstPositiveRoot(0.5 * curvature, slope, z - this.levels[down]));
-    if (!(ahead <= reach)) return end;
-    return Math.min(end, st.t + (ahead > LEVEL_DIRECT_M ? LEVEL_APPROACH * ahead : ahead));
+    return levelAim(this.levels, st.t, st.y[0], this.knotSlope, this.knotRate, this.equations.earthRadius_m, st.dt, this.settings.endRange_m);
   }
 
   /** Sets the equations' smooth domain to the pair of levels around z (the one above/below z when on a level, by dir). */
@@ -273,35 +242,4 @@ export class RayKernel {
     st.restore(this.end);
     return -1;
   }
-}
-
-/** Smallest positive root of a·x² + b·x + c (Infinity if none), by the cancellation-free formulas. */
-function firstPositiveRoot(a: number, b: number, c: number): number {
-  if (a === 0) {
-    const x = -c / b;
-    return x > 0 ? x : Infinity;
-  }
-  const disc = b * b - 4 * a * c;
-  if (disc < 0) return Infinity;
-  const qq = -0.5 * (b + (b >= 0 ? 1 : -1) * Math.sqrt(disc));
-  const r1 = qq / a;
-  const r2 = qq !== 0 ? c / qq : Infinity;
-  const lo = Math.min(r1, r2);
-  const hi = Math.max(r1, r2);
-  return lo > 0 ? lo : hi > 0 ? hi : Infinity;
-}
-
-/** Index of the nearest level strictly above z (dir > 0) or strictly below z (dir < 0); −1 if none. */
-export function nextLevel(levels: Float64Array, z: number, dir: number): number {
-  let lo = 0;
-  let hi = levels.length; // first index with levels[i] > z
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (levels[mid] > z) hi = mid;
-    else lo = mid + 1;
-  }
-  if (dir > 0) return lo < levels.length ? lo : -1;
-  let i = lo - 1;
-  if (i >= 0 && levels[i] === z) i--;
-  return i;
 }
