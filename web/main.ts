@@ -17,7 +17,7 @@ import { plotConfig, type Figure } from './figures/theme.js';
 import { viewFigure } from './figures/view.js';
 import { mountEnsemblePanel } from './ensemble-panel.js';
 import { panelNotes, statusLine, summaryLines } from './summary.js';
-import { DEFAULT_VIEWER_RAYS, Session, type SessionUpdate } from './session.js';
+import { DEFAULT_VIEWER_RAYS, EDIT_DEBOUNCE_MS, Session, type PanelData, type SessionUpdate } from './session.js';
 import type { Limits, ScenarioJson } from './types.js';
 
 declare const Plotly: typeof PlotlyT;
@@ -36,10 +36,18 @@ let specs = new Map<string, FieldSpec>();
 const localErrors = new Map<string, string>();
 let lastIssues: SessionUpdate['issues'] = [];
 
-const session = new Session(api, (update) => void draw(update), (busy) => {
-  document.body.toggleAttribute('data-busy', busy);
-  if (busy) byId('status').textContent = 'tracing…';
-});
+const session = new Session(
+  api,
+  (update) => void draw(update),
+  (busy) => {
+    document.body.toggleAttribute('data-busy', busy);
+    if (busy) byId('status').textContent = 'tracing…';
+  },
+  EDIT_DEBOUNCE_MS,
+  (generation, data) => {
+    drawChain = drawChain.then(() => drawPanels(generation, data));
+  },
+);
 
 // ── Editor ────────────────────────────────────────────────────────────────────────────────────
 
@@ -198,31 +206,72 @@ function plot(id: string, figure: Figure, name: string): Promise<unknown> {
   return Plotly.react(byId(id), figure.data, figure.layout, plotConfig(name));
 }
 
+/** Panels drawn for the current generation; drawing runs in one chain so panels never interleave. */
+let drawnGeneration = -1;
+const drawnPanels = new Set<string>();
+let drawChain: Promise<void> = Promise.resolve();
+let draw_ms = 0;
+
+/**
+ * Draws every panel whose data has arrived and that is not yet drawn for this generation (the
+ * session reports each panel's data as it arrives, so the first plots appear while the server
+ * still computes the rest).
+ */
+async function drawPanels(generation: number, data: Partial<PanelData>): Promise<void> {
+  if (generation !== drawnGeneration) {
+    drawnGeneration = generation;
+    drawnPanels.clear();
+    draw_ms = 0;
+  }
+  const started = performance.now();
+  /** True once per panel and generation, when its data is there. */
+  const first = (name: string, ready: unknown): boolean => {
+    if (!ready || drawnPanels.has(name)) return false;
+    drawnPanels.add(name);
+    return true;
+  };
+  const sight = data.trace ?? data.findings;
+  if (first('air', data.profile && sight)) {
+    const observer_height_m = sight!.observer_height_m;
+    const target_height_m = data.trace?.target_height_m ?? data.findings!.target_height_m;
+    await plot('plot-air', airFigure(data.profile!, { observer_height_m, target_height_m }), 'air');
+  }
+  if (first('paths', data.trace)) {
+    const trace = data.trace!;
+    await plot('plot-paths', pathsFigure(trace), 'light-paths');
+    if (trace.fan) {
+      byId<HTMLInputElement>('fan-from').placeholder = trace.fan.from_deg.toFixed(3);
+      byId<HTMLInputElement>('fan-to').placeholder = trace.fan.to_deg.toFixed(3);
+    }
+  }
+  if (first('heights', data.findings)) {
+    await plot('plot-heights', heightsFigure(data.findings!.transfer, { target_height_m: data.findings!.target_height_m }), 'heights-at-target');
+  }
+  if (first('view', data.view && data.findings)) {
+    await plot('plot-view', viewFigure(data.view!, { images: data.findings!.visibility.images }), 'view');
+  }
+  draw_ms += performance.now() - started;
+}
+
+/** The session's update after every request has answered: the rest of the panels, words, status, ready marker. */
 async function draw(update: SessionUpdate): Promise<void> {
   lastIssues = update.issues;
   showErrors();
-  const started = performance.now();
   document.body.classList.toggle('stale', update.stale);
   const data = update.data;
-  if (data) {
-    const target_height_m = data.trace.target_height_m;
-    await plot('plot-air', airFigure(data.profile, { observer_height_m: data.trace.observer_height_m, target_height_m }), 'air');
-    await plot('plot-paths', pathsFigure(data.trace), 'light-paths');
-    await plot('plot-heights', heightsFigure(data.findings.transfer, { target_height_m }), 'heights-at-target');
-    await plot('plot-view', viewFigure(data.view, { images: data.findings.visibility.images }), 'view');
-    const findings = byId('findings');
-    findings.replaceChildren(...summaryLines(data).map((line) => el('p', { class: `finding ${line.kind}` }, line.text)));
-    const notes = byId('warnings');
-    notes.replaceChildren(...panelNotes(data, update.stale).map((n) => el('li', {}, n)));
-    if (data.trace.fan) {
-      byId<HTMLInputElement>('fan-from').placeholder = data.trace.fan.from_deg.toFixed(3);
-      byId<HTMLInputElement>('fan-to').placeholder = data.trace.fan.to_deg.toFixed(3);
-    }
+  if (data && !update.stale) {
+    const done = drawChain.then(() => drawPanels(update.generation, data));
+    drawChain = done;
+    await done;
+    const started = performance.now();
+    byId('findings').replaceChildren(...summaryLines(data).map((line) => el('p', { class: `finding ${line.kind}` }, line.text)));
+    draw_ms += performance.now() - started;
   }
-  const draw_ms = performance.now() - started;
-  byId('status').textContent = statusLine(update, draw_ms);
+  if (data) byId('warnings').replaceChildren(...panelNotes(data, update.stale).map((n) => el('li', {}, n)));
+  const drawn_ms = update.stale ? 0 : draw_ms;
+  byId('status').textContent = statusLine(update, drawn_ms);
   document.body.dataset.serverMs = update.server_ms.toFixed(1);
-  document.body.dataset.drawMs = draw_ms.toFixed(1);
+  document.body.dataset.drawMs = drawn_ms.toFixed(1);
   document.body.dataset.ready = String(update.generation);
 }
 

@@ -54,6 +54,8 @@ export class Session {
     private readonly onUpdate: (update: SessionUpdate) => void,
     private readonly onBusy: (busy: boolean) => void = () => {},
     private readonly debounce_ms = EDIT_DEBOUNCE_MS,
+    /** Called as each panel's data arrives (the page may draw it at once); the full update follows. */
+    private readonly onPartial: (generation: number, data: Partial<PanelData>) => void = () => {},
   ) {}
 
   /** Replaces the scenario; recomputes after the debounce, or at once when `now`. */
@@ -87,11 +89,17 @@ export class Session {
     const started = performance.now();
     this.onBusy(true);
     const signal = controller.signal;
+    const partial: Partial<PanelData> = {};
+    const arrived = <K extends keyof PanelData>(key: K) => (value: PanelData[K]) => {
+      partial[key] = value;
+      if (!signal.aborted && generation === this.generation) this.onPartial(generation, { ...partial });
+      return value;
+    };
     const results = await Promise.allSettled([
-      this.api.profile(scenario, airSampleHeights(scenario), signal),
-      this.api.trace(scenario, this.fan, VIEWER_PATH_POINTS, signal),
-      this.api.findings(scenario, signal),
-      this.api.view(scenario, signal),
+      this.api.profile(scenario, airSampleHeights(scenario), signal).then(arrived('profile')),
+      this.api.trace(scenario, this.fan, VIEWER_PATH_POINTS, signal).then(arrived('trace')),
+      this.api.findings(scenario, signal).then(arrived('findings')),
+      this.api.view(scenario, signal).then(arrived('view')),
     ]);
     if (signal.aborted || generation !== this.generation) return;
     this.inFlight = null;
