@@ -5,7 +5,7 @@
  *
  * Run alone: node --import tsx bench/ensemble.ts   (or through bench/run.ts).
  */
-import { availableParallelism } from 'node:os';
+import { availableParallelism, loadavg } from 'node:os';
 import { validateScenarioFile } from '../server/scenario/load.js';
 import { runEnsemble } from '../server/service/ensemble.js';
 
@@ -51,6 +51,8 @@ export async function benchEnsemble(): Promise<string[]> {
     `ensemble: 2 workers ${two.seconds.toFixed(1)} s (${((1000 * two.seconds) / MEMBERS).toFixed(0)} ms per member)`,
     `ensemble: ratio 1 worker / 2 workers = ${(one.seconds / two.seconds).toFixed(2)} (2.00 would be perfect scaling)`,
     `ensemble: results identical with 1 and 2 workers: ${one.fingerprint === two.fingerprint ? 'yes' : 'NO'}`,
+    // Other work on the machine takes cores from the pool: the ratio means little when this is above the core count.
+    `ensemble: load average at the end ${loadavg()[0].toFixed(2)} on ${availableParallelism()} cores`,
   ];
   return lines;
 }
