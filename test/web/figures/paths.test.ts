@@ -20,12 +20,11 @@ const TRACE: TraceResult = {
 };
 
 describe('fateTrace', () => {
-  it('joins the rays of one fate with a gap after each, in km, tagging points with the ray\'s elevation in arcmin', () => {
+  it('joins the rays of one fate with a gap after each, ranges in km', () => {
     const t = fateTrace(TRACE, 'target');
     expect(t.count).toBe(2);
     expect(t.x).toEqual([0, 5, 10, null, 0, 5, 10, null]);
     expect(t.y).toEqual([5, 7, 12, null, 5, 15, 30, null]);
-    expect(t.customdata).toEqual([0, 0, 0, null, 6, 6, 6, null]);
   });
 });
 
