@@ -37,11 +37,11 @@ export function hiddenHeightWords(h: Percentiles | null): string {
 }
 
 /** One sentence per input that matters, most influential first, and one for the rest. */
-export function sensitivityWords(ranked: readonly RankedInput[], output: 'hidden_height_m' | 'top_elevation_rad' | null): string[] {
+export function sensitivityWords(ranked: readonly RankedInput[], output: 'hidden_fraction' | 'top_elevation_rad' | null): string[] {
   if (output === null || ranked.length === 0) return ['No input changed the outcome in these runs, so no ranking of the inputs can be given.'];
-  const what = output === 'hidden_height_m' ? 'hidden height' : 'apparent elevation of the target top';
+  const what = output === 'hidden_fraction' ? 'hidden share of the target' : 'apparent elevation of the target top';
   const effect = (rho: number) =>
-    output === 'hidden_height_m' ? (rho > 0 ? 'higher values hide more of the target' : 'higher values hide less of the target') : rho > 0 ? 'higher values lift the top' : 'higher values lower the top';
+    output === 'hidden_fraction' ? (rho > 0 ? 'higher values hide more of the target' : 'higher values hide less of the target') : rho > 0 ? 'higher values lift the top' : 'higher values lower the top';
   const matters = ranked.filter((r) => r.rho !== null && r.score >= NEGLIGIBLE_RHO);
   const lines = matters.map((r, k) => {
     const lead = k === 0 ? `The ${r.label} mattered most` : `Then the ${r.label}`;

@@ -123,7 +123,7 @@ export function sensitivityFigure(ensemble: EnsembleResult): FigureSpec {
   return {
     id: 'fig-sensitivity',
     title: 'What mattered most',
-    caption: 'Spearman rank correlation of each input with the hidden height (or the target top elevation when the hidden height never changed); longest bar first. Positive: higher values hide more.',
+    caption: 'Spearman rank correlation of each input with the hidden share of the target (or the target top elevation when that never changed); longest bar first. Positive: higher values hide more.',
     data: [
       {
         type: 'bar',

@@ -92,8 +92,8 @@ export interface EnsembleResult extends SummaryFields {
 }
 
 export const SENSITIVITY_METHOD =
-  "Spearman rank correlation between each input's sampled values and the hidden height at the target over the finished runs " +
-  '(the apparent elevation of the target top when the hidden height never changes); the score is its magnitude, 0..1. ' +
+  "Spearman rank correlation between each input's sampled values and the hidden fraction of the target (1 − visible fraction) over the finished runs " +
+  '(the apparent elevation of the target top when the hidden fraction never changes); the score is its magnitude, 0..1. ' +
   'It measures monotone influence one input at a time; it is not a variance-based (Sobol) index.';
 
 /** Validates the options and fills defaults (InputRangeError / InputError naming the option). */

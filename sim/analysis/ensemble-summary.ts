@@ -1,7 +1,9 @@
 /**
  * Summary of an ensemble: probabilities of each visibility status with standard errors,
  * percentiles of the findings, and a ranking of the inputs by Spearman rank correlation with the
- * hidden height (or, when that never changes, with the target top's apparent elevation).
+ * hidden fraction of the target, 1 − visible_fraction (or, when that never changes, with the
+ * target top's apparent elevation). The fraction rather than the hidden height in metres, so that
+ * a taller target does not count as "more hidden" merely because more metres of it are lost.
  */
 import { percentiles, proportion, spearman, type Percentiles } from './ensemble-stats.js';
 import type { VisibilityStatus } from './visibility.js';
@@ -54,7 +56,7 @@ export interface EnsembleSummary {
   top_elevation_rad: Percentiles | null;
   sighting_range_m: { top: Percentiles | null; light: Percentiles | null; whole: Percentiles | null } | null;
   /** What the sensitivity ranking correlates the inputs with; null when nothing varied. */
-  sensitivity_output: 'hidden_height_m' | 'top_elevation_rad' | null;
+  sensitivity_output: 'hidden_fraction' | 'top_elevation_rad' | null;
   /** Most influential first. */
   sensitivity: Sensitivity[];
 }
@@ -100,15 +102,15 @@ export function summariseEnsemble(records: readonly MemberRecord[], inputCount: 
 }
 
 /**
- * Ranks the inputs by |Spearman ρ| with the hidden height; when the hidden height is the same in
- * every member, with the top's apparent elevation (over members that see it). Undefined
+ * Ranks the inputs by |Spearman ρ| with the hidden fraction (1 − visible_fraction); when that is
+ * the same in every member, with the top's apparent elevation (over members that see it). Undefined
  * correlations (an input or the output constant) score 0.
  */
 function rankInputs(done: readonly { values: readonly number[]; findings: MemberFindings }[], inputCount: number): { output: EnsembleSummary['sensitivity_output']; sensitivity: Sensitivity[] } {
-  const byHidden = done.map((r) => r.findings.hidden_height_m);
+  const byHidden = done.map((r) => 1 - r.findings.visible_fraction);
   const seeTop = done.filter((r) => r.findings.top_elevation_rad !== null);
-  const candidates: { output: 'hidden_height_m' | 'top_elevation_rad'; rows: typeof done; y: number[] }[] = [
-    { output: 'hidden_height_m', rows: done, y: byHidden },
+  const candidates: { output: 'hidden_fraction' | 'top_elevation_rad'; rows: typeof done; y: number[] }[] = [
+    { output: 'hidden_fraction', rows: done, y: byHidden },
     { output: 'top_elevation_rad', rows: seeTop, y: seeTop.map((r) => r.findings.top_elevation_rad as number) },
   ];
   const chosen = candidates.find((c) => c.y.length >= 2 && c.y.some((v) => v !== c.y[0])) ?? null;

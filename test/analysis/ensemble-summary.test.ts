@@ -34,7 +34,7 @@ describe('summariseEnsemble', () => {
     expect(s.sensitivity.map((x) => x.input)).toEqual([0, 1, 2]);
     expect(s.sensitivity[0].rho).toBeGreaterThan(0.9);
     expect(s.sensitivity[1].rho).toBeLessThan(0);
-    expect(s.sensitivity_output).toBe('hidden_height_m');
+    expect(s.sensitivity_output).toBe('hidden_fraction');
   });
 
   it('counts statuses into probabilities with binomial standard errors and leaves failed members out', () => {
@@ -53,7 +53,7 @@ describe('summariseEnsemble', () => {
     expectClose(s.hidden_height_m, { p5: 0, p50: 2.5, p95: 9.25 }, { abs: 1e-12 });
   });
 
-  it('falls back to the top elevation when the hidden height never changes', () => {
+  it('falls back to the top elevation when the hidden fraction never changes', () => {
     const records = [0, 1, 2, 3].map((x) => ({ ...member([x], () => 0), findings: { ...member([x], () => 0).findings!, top_elevation_rad: 0.001 * x } }));
     const s = summariseEnsemble(records, 1);
     expect(s.sensitivity_output).toBe('top_elevation_rad');

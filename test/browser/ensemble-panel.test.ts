@@ -20,7 +20,7 @@ describe('the ensemble panel', () => {
     await page.fill('#ensemble-members', '6');
     await page.click('#ensemble-run');
     await page.waitForSelector('#panel-ensemble[data-ready]', { timeout: 60_000 });
-    expect(await page.$eval('#ensemble-progress', (p) => (p as HTMLProgressElement).value)).toBe(1);
+    expect(await page.$eval('#ensemble-progress', (p) => (p as unknown as { value: number }).value)).toBe(1);
     expect(await page.textContent('#panel-ensemble [role=status]')).toMatch(/^6 runs/);
     expect(await page.$$eval('#ensemble-summary li', (items) => items.length)).toBeGreaterThan(1);
     const bars = await page.$eval('#plot-ensemble', (div) => (div as unknown as { data: { y?: number[] }[] }).data[0].y ?? []);

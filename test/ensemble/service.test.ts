@@ -51,8 +51,8 @@ describe('runEnsemble', () => {
   });
 
   it('ranks first the input built to dominate', async () => {
-    // Eye height 4..16 m moves the hidden height at 15 km by metres; the range's 10 m spread moves it by
-    // millimetres; humidity does nothing with straight lines of sight.
+    // Eye height 4..16 m moves the hidden height at 15 km by metres (a large share of the 5 m target);
+    // the range's 10 m spread moves it by millimetres; humidity does nothing with straight lines of sight.
     const file = geometric({ uniform: { min: 4, max: 16 } }, { normal: { mean: 15000, sd: 10 } }, { uniform: { min: 0.2, max: 0.9 } });
     const e = await runEnsemble(file, { members: 10, seed: 5, sampling: 'latin-hypercube', workers: 0 });
     expect(e.sensitivity[0].input).toBe('observer.height_m');
