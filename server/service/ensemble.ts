@@ -3,7 +3,7 @@
  * members, runs them on the worker pool, and summarises probabilities, percentiles and the
  * sensitivity ranking in JSON-ready form. Shared by the CLI, the HTTP server and the report.
  */
-import { evaluateMember, type MemberOptions } from '../../sim/analysis/ensemble-member.js';
+import type { MemberOptions } from '../../sim/analysis/ensemble-member.js';
 import { MAX_SEED } from '../../sim/analysis/ensemble-random.js';
 import { SAMPLING_METHODS, distributionPointValue, sampleInputs, type SamplingMethod } from '../../sim/analysis/ensemble-sampling.js';
 import type { Percentiles } from '../../sim/analysis/ensemble-stats.js';
@@ -13,9 +13,9 @@ import { RAD_PER_DEG } from '../../sim/constants.js';
 import { InputError, InputRangeError } from '../../sim/errors.js';
 import { ensembleInputs, memberFile } from '../ensemble/inputs.js';
 import { runMemberTasks } from '../ensemble/pool.js';
+import runMember from '../ensemble/worker.js';
 import { toCsv, type CsvRow } from '../ensemble/csv.js';
 import { elevationWords, hiddenHeightWords, probabilityWords, sensitivityWords, sightingWords } from '../ensemble/words.js';
-import { convertScenario } from '../scenario/convert.js';
 import type { ScenarioFile } from '../scenario/schema.js';
 
 /** Defaults of the ensemble options (repeated in each option's doc). */
@@ -138,7 +138,7 @@ function memberRow(index: number, inputs: Record<string, number>, findings: Memb
 export async function runEnsemble(file: ScenarioFile, options: EnsembleOptions = {}, hooks: EnsembleHooks = {}): Promise<EnsembleResult> {
   const settings = resolveEnsembleOptions(options);
   const memberOptions: MemberOptions = { sighting: settings.sighting };
-  const point = evaluateMember(convertScenario(file), memberOptions);
+  const point = runMember({ index: -1, file, options: memberOptions });
   const inputs = ensembleInputs(file);
   const values = sampleInputs(inputs.map((i) => i.distribution), settings.members, settings.seed, settings.sampling);
   const tasks = values.map((v, index) => ({ index, file: memberFile(file, inputs, v), options: memberOptions }));
@@ -156,7 +156,7 @@ export async function runEnsemble(file: ScenarioFile, options: EnsembleOptions =
   const rows = finished.map((m) => memberRow(m.result.index, byPath(m.values), m.result.findings, m.result.error));
   const sensitivity = summary.sensitivity.map((s) => ({ input: inputs[s.input].path, label: inputs[s.input].label, score: s.score, rho: s.rho }));
   const method = settings.sampling === 'monte-carlo' ? 'Monte Carlo' : 'Latin hypercube';
-  const warnings = ensembleWarnings(inputs.length, run.cancelled, finished.length, tasks.length, summary.failed, rows, point.warnings);
+  const warnings = ensembleWarnings(inputs.length, run.cancelled, finished.length, tasks.length, summary.failed, rows, point.error === null ? point.warnings : [...point.warnings, `the single run with every input at its central value failed: ${point.error}`]);
   return {
     scenario: file.name,
     members: summary.members,
@@ -177,7 +177,7 @@ export async function runEnsemble(file: ScenarioFile, options: EnsembleOptions =
     sensitivity_method: SENSITIVITY_METHOD,
     sensitivity_output: summary.sensitivity_output,
     inputs: inputs.map((i) => ({ path: i.path, label: i.label, unit: i.unit, distribution: i.file_distribution })),
-    point: memberRow(-1, byPath(inputs.map((i) => distributionPointValue(i.distribution))), point.findings, null),
+    point: memberRow(-1, byPath(inputs.map((i) => distributionPointValue(i.distribution))), point.findings, point.error),
     summary: [
       probabilityWords(summary.members, method, settings.seed, summary.probabilities, summary.standard_errors),
       hiddenHeightWords(summary.hidden_height_m),

@@ -95,6 +95,29 @@ describe('runEnsemble', () => {
     expect(e.warnings.some((w) => w.startsWith('partial:'))).toBe(true);
   });
 
+  it('leaves out and counts members whose sampled inputs the model cannot take', async () => {
+    // The second node's height 0..2 m (uniform) lies at or below the first node's 1 m in about half
+    // of the members: convertScenario rejects those (heights must increase), the rest run. The
+    // midpoint, 1 m, fails too: the single run is reported as failed, the ensemble goes on.
+    const file = validateScenarioFile({
+      name: 'Failing members test (invented)',
+      observer: { height_m: 10 },
+      target: { range_m: 15000, height_m: 5 },
+      atmosphere: { profile: [{ height_m: 1, temperature_C: 10 }, { height_m: { uniform: { min: 0, max: 2 } }, temperature_C: 11 }] },
+      optics: { index_model: 'none' },
+    });
+    const e = await runEnsemble(file, { members: 8, seed: 21, workers: 0 });
+    const bad = e.member_rows.filter((r) => r.error !== null);
+    expect(bad.length).toBe(e.failed);
+    expect(e.failed).toBeGreaterThan(0);
+    expect(e.members + e.failed).toBe(8);
+    for (const r of bad) expect(r.inputs['atmosphere.profile.1.height_m']).toBeLessThanOrEqual(1);
+    expect(bad[0].error).toMatch(/atmosphere\.profile\.1\.height_m: .* must be greater than the previous node's height/);
+    expect(e.warnings.some((w) => /member.? failed and .* left out of the statistics/.test(w))).toBe(true);
+    expect(e.point.error).toMatch(/must be greater than the previous node's height/);
+    expect(e.point.status).toBeNull();
+  });
+
   it('writes the members as CSV with one column per input', async () => {
     const file = geometric({ normal: { mean: 10, sd: 1 } }, 20000);
     const e = await runEnsemble(file, { members: 3, seed: 4, workers: 0 });
