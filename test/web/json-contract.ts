@@ -5,7 +5,8 @@
  */
 import type { ProfileLevel as ServerProfileLevel } from '../../server/service/profile.js';
 import type { TraceResult as ServerTraceResult, TracedRay as ServerTracedRay } from '../../server/service/trace.js';
-import type { ProfileLevel, TraceRay, TraceResult } from '../../web/types.js';
+import type { ViewJson as ServerViewJson } from '../../server/service/view.js';
+import type { ProfileLevel, TraceRay, TraceResult, ViewJson } from '../../web/types.js';
 
 type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
 type Assert<T extends true> = T;
@@ -14,4 +15,5 @@ export type ContractChecks = [
   Assert<Same<Omit<ServerProfileLevel, 'vapour_pressure_hPa'>, ProfileLevel>>,
   Assert<Same<ServerTracedRay, TraceRay>>,
   Assert<Same<ServerTraceResult, Omit<TraceResult, 'fan'>>>,
+  Assert<Same<Omit<ServerViewJson, 'legend'>, Omit<ViewJson, 'legend'>>>,
 ];
