@@ -89,19 +89,3 @@ export function scenarioFromBody(value: unknown, prefix = 'scenario'): BodyScena
   }
   return parsed;
 }
-
-/**
- * Runs a service call, turning input errors from sim/ into HttpError(400) with fields named as
- * in the request body (scenario fields prefixed, others through `rename`).
- */
-export function withBodyFields<T>(compute: () => T, rename: Record<string, string> = {}): T {
-  try {
-    return compute();
-  } catch (error) {
-    const mapped = inputErrorToHttp(error, (f) => {
-      for (const [from, to] of Object.entries(rename)) if (f.startsWith(from)) return to + f.slice(from.length);
-      return scenarioField(f);
-    });
-    throw mapped ?? error;
-  }
-}
