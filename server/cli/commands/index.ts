@@ -3,6 +3,7 @@ import type { Command } from 'commander';
 import { registerEnsemble } from './ensemble.js';
 import { registerOutlook } from './outlook.js';
 import { registerProfile } from './profile.js';
+import { registerTrace } from './trace.js';
 import { registerReport } from './report.js';
 import { registerSighting } from './sighting.js';
 import { registerHorizon } from './horizon.js';
@@ -13,13 +14,14 @@ import { registerFindings } from './findings.js';
 
 export function registerCommands(program: Command): void {
   registerProfile(program);
-  registerOutlook(program);
-  registerEnsemble(program);
-  registerReport(program);
-  registerSighting(program);
+  registerTrace(program);
   registerHorizon(program);
   registerTransfer(program);
   registerVisibility(program);
   registerRefraction(program);
   registerFindings(program);
+  registerOutlook(program);
+  registerEnsemble(program);
+  registerReport(program);
+  registerSighting(program);
 }
