@@ -4,8 +4,8 @@
  * rays it traces so that callers can cap their work.
  */
 import type { IndexTable } from '../refractivity/index-table.js';
-import { traceRay } from '../trace/ray.js';
-import type { Fate } from '../trace/kernel.js';
+import { FATES, FATE_TARGET, RayKernel, type Fate } from '../trace/kernel.js';
+import { requireElevation, requireObserverHeight, resolveTraceOptions } from '../trace/options.js';
 
 /** Where one ray from the observer ends when traced toward the target range. */
 export interface RangeSample {
@@ -34,7 +34,12 @@ export const PROBE_TOLERANCE_M = 2e-6;
  */
 export const FINE_PROBE_TOLERANCE_M = 1e-9;
 
-/** Traces rays from one observer to one range through one medium. */
+/**
+ * Traces rays from one observer to one range through one medium. One ray kernel per tolerance
+ * serves every ray (sim/trace/kernel.ts: the integrator, knot store and levels are built once);
+ * a kernel keeps no state from one ray to the next, so each ray is traced exactly as traceRay
+ * would trace it alone.
+ */
 export class RangeProbe {
   readonly table: IndexTable;
   readonly observerHeight_m: number;
@@ -42,10 +47,13 @@ export class RangeProbe {
   readonly earthRadius_m: number;
   /** Rays traced so far. */
   count = 0;
+  /** Kernels of the ordinary and the fine tolerance, built at their first ray. */
+  private ordinary: RayKernel | null = null;
+  private fine: RayKernel | null = null;
 
   /**
    * @param table the medium n(z).
-   * @param observerHeight_m observer height, m (0 ≤ h < table top; traceRay validates it).
+   * @param observerHeight_m observer height, m (0 ≤ h < table top; checked at the first ray).
    * @param range_m target range, m (> 0).
    * @param earthRadius_m radius of the surface sphere, m.
    */
@@ -63,18 +71,28 @@ export class RangeProbe {
    */
   probe(elevation_rad: number, fine = false): RangeSample {
     this.count++;
-    const ray = traceRay(this.table, this.observerHeight_m, elevation_rad, {
+    const kernel = fine ? (this.fine ??= this.kernel(FINE_PROBE_TOLERANCE_M)) : (this.ordinary ??= this.kernel(PROBE_TOLERANCE_M));
+    requireElevation('elevation_rad', elevation_rad);
+    kernel.trace(this.observerHeight_m, elevation_rad, false);
+    const target = kernel.fate === FATE_TARGET;
+    return {
+      elevation_rad,
+      fate: FATES[kernel.fate],
+      height_m: target ? Math.max(0, kernel.endHeight_m) : null,
+      endRange_m: kernel.endRange_m,
+      endElevation_rad: kernel.endElevation_rad,
+    };
+  }
+
+  /** A kernel to the target range with the given tolerance (validates as traceRay does: InputRangeError). */
+  private kernel(tolerance_m: number): RayKernel {
+    const settings = resolveTraceOptions(this.table, {
       earthRadius_m: this.earthRadius_m,
       stopRange_m: this.range_m,
       maxRange_m: this.range_m,
-      tolerance_m: fine ? FINE_PROBE_TOLERANCE_M : PROBE_TOLERANCE_M,
+      tolerance_m,
     });
-    return {
-      elevation_rad,
-      fate: ray.fate,
-      height_m: ray.fate === 'target' ? Math.max(0, ray.end.height_m) : null,
-      endRange_m: ray.end.range_m,
-      endElevation_rad: ray.end.elevation_rad,
-    };
+    requireObserverHeight(this.observerHeight_m, settings);
+    return new RayKernel(this.table, settings);
   }
 }
