@@ -1,8 +1,8 @@
 /**
  * Outlook speed: a 168-row week of invented hourly observations at the demo site, rows per second
- * with 1 worker (this thread) and with 2 worker threads (piscina), and their ratio; also the pool's
- * break-even on a short series (what POOL_MIN_ROWS in server/outlook/pool.ts rests on), and a check
- * that both runs give identical rows.
+ * with 1 worker (this thread) and with 2 worker threads (piscina), and their ratio; also both on a
+ * series of POOL_MIN_ROWS rows (server/outlook/pool.ts), where the pool should about break even,
+ * and a check that both runs give identical rows.
  *
  * Run alone: node --import tsx bench/outlook.ts   (or through bench/run.ts).
  */
@@ -11,13 +11,13 @@ import { availableParallelism, loadavg } from 'node:os';
 import { join } from 'node:path';
 import type { OutlookObservation } from '../sim/analysis/outlook.js';
 import { CELSIUS_OFFSET_K } from '../sim/constants.js';
-import { computeFindings } from '../server/outlook/pool.js';
+import { computeFindings, POOL_MIN_ROWS } from '../server/outlook/pool.js';
 import { siteFromText } from '../server/outlook/site.js';
 
 /** Rows of the benchmark: a week of hours. */
 const WEEK_ROWS = 168;
-/** Rows of the short series that tests the pool's break-even. */
-const SHORT_ROWS = 12;
+/** Rows of the short series that tests the pool's break-even: the count at which 'auto' starts the pool. */
+const SHORT_ROWS = POOL_MIN_ROWS;
 
 /**
  * An invented week over a cold sea (about 11 °C): air 9..18 °C on a daily cycle that warms a little

@@ -9,11 +9,14 @@ import { InputError } from '../../sim/errors.js';
 import type { OutlookTask } from './worker.js';
 
 /**
- * Fewest rows for which `workers: 'auto'` starts a pool. Measured on this 2-core machine
- * (bench/outlook.ts): starting a worker (tsx loading the simulation) costs about as much as a few
- * rows, so below this count one thread is as fast.
+ * Fewest rows for which `workers: 'auto'` starts a pool. Measured on this 2-core machine with
+ * bench/outlook.ts while other work ran (load average 2.4–3): two workers take about 1 s to start
+ * (each loads the simulation through tsx and warms up its JIT); over 168 rows the pool then gave
+ * 1.2–1.5 times the rows per second of one thread, over 36 rows 0.6–0.8 times: the break-even lay
+ * near 60 rows. On an idle machine (about 72 ms per row in one thread, 36 ms with two) it would lie
+ * near 1 s / 36 ms ≈ 28 rows. 48 sits between.
  */
-export const POOL_MIN_ROWS = 12;
+export const POOL_MIN_ROWS = 48;
 
 /** Options of computeFindings. */
 export interface ComputeOptions {
