@@ -32,7 +32,7 @@ function escapeHtml(text: string): string {
  */
 export async function outlookHtml(result: OutlookResult, caution: string, plotlySource?: string): Promise<string> {
   const plotly = plotlySource ?? (await readFile(PLOTLY_PATH, 'utf8'));
-  const figure = outlookFigure(result);
+  const figure = outlookFigure(result, { title: '' }); // the page's heading names the site
   const figureJson = JSON.stringify(figure).replace(/</g, '\\u003c');
   const s = result.site;
   const landmark = `${s.landmark.name ?? 'the landmark'}, ${(s.landmark.range_m / 1000).toFixed(1)} km away and ${s.landmark.height_m} m high`;

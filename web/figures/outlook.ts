@@ -96,7 +96,8 @@ export function outlookFigure(result: OutlookChartInput, options: OutlookFigureO
     yaxis2: axis('magnification', { domain: [0.33, 0.57], type: 'log' }),
     yaxis3: axis('images', { overlaying: 'y2', side: 'right', rangemode: 'tozero', dtick: 1, showgrid: false }),
     yaxis4: axis('strength', { domain: [0, 0.28], range: [0, 1] }),
-    yaxis5: axis('air − sea, K', { overlaying: 'y4', side: 'right', showgrid: false, zeroline: true }),
+    // tickmode 'auto': an overlaying axis otherwise takes its tick positions from the axis under it.
+    yaxis5: axis('air − sea, K', { overlaying: 'y4', side: 'right', showgrid: false, zeroline: true, tickmode: 'auto' }),
   } as Partial<Layout>);
   return { data: data as Data[], layout };
 }
