@@ -1,9 +1,10 @@
 /**
  * Findings cost per request: CPU milliseconds of one `findings` computation (what POST
  * /api/findings runs in a worker) for every scenario file in profiles/, in two cases:
- *   - shared air: the medium comes from the worker's cache (an eye-height edit; the viewer's
- *     common case), timed over RUNS requests with the eye height varied;
- *   - air rebuilt: the medium is built inside the request (a temperature edit).
+ *   - shared air: the media come from a cache as in the HTTP worker (server/http/medium-cache.ts;
+ *     an eye-height edit, the viewer's common case), timed with the eye height varied;
+ *   - air rebuilt: no cache, every medium (the scenario's and its references') built inside the
+ *     request (the worst case of an air edit).
  * CPU time is process.cpuUsage (user + system) of this single-threaded process, so other work on
  * the machine changes it far less than wall time; both are printed with the load average.
  * With `--snapshot FILE` the findings JSON of every profile (shared-air case, first eye height)
@@ -18,6 +19,7 @@ import { join } from 'node:path';
 import { buildMedium } from '../sim/atmosphere/medium.js';
 import type { Scenario } from '../sim/scenario.js';
 import { REPO_ROOT } from '../server/http/bundle.js';
+import { MediumCache } from '../server/http/medium-cache.js';
 import { scenarioFromJson } from '../server/scenario/load.js';
 import { findings } from '../server/service/findings.js';
 
@@ -95,9 +97,10 @@ export async function benchFindings(runs = DEFAULT_RUNS, snapshot?: string, comp
   const results: Record<string, unknown> = {};
   for (const { id, scenario } of scenarios()) {
     const medium = buildMedium(scenario);
-    const first = findings(withEye(scenario, 0), { ...VIEWER_OPTIONS, medium });
+    const media = new MediumCache();
+    const first = findings(withEye(scenario, 0), { ...VIEWER_OPTIONS, medium, media });
     results[id] = first;
-    const shared = time(runs, (i) => findings(withEye(scenario, i), { ...VIEWER_OPTIONS, medium }));
+    const shared = time(runs, (i) => findings(withEye(scenario, i), { ...VIEWER_OPTIONS, medium, media }));
     const rebuilt = time(runs, (i) => findings(withEye(scenario, i), { ...VIEWER_OPTIONS }));
     rows.push({ id, shared_cpu_ms: shared.cpu, shared_wall_ms: shared.wall, rebuilt_cpu_ms: rebuilt.cpu, rebuilt_wall_ms: rebuilt.wall, rays: first.transfer.rays_traced });
   }

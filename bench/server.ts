@@ -5,11 +5,14 @@
  *     as when viewers edit the sight line);
  *   - varied air: each request a different surface temperature (the medium is rebuilt every time).
  * The server runs as `npm start` does, in its own process (autocannon would otherwise share its
- * event loop). It computes on one event loop, so under 16 connections a request waits for the
- * others: latency ≈ 16 × the time of one request.
+ * event loop), computing in a pool of worker threads, one per core. Under 16 connections a request
+ * waits for the others: latency ≈ 16 × (CPU time of one request) / (cores free for the server).
+ * So each load also reports the server process's CPU time per request (all its threads, from
+ * /proc/<pid>/stat on Linux): unlike latency, it hardly depends on what else runs on the machine.
  *
  *   node --import tsx bench/server.ts
  */
+import { readFileSync } from 'node:fs';
 import { availableParallelism, loadavg } from 'node:os';
 import { spawn, type ChildProcess } from 'node:child_process';
 import autocannon from 'autocannon';
@@ -43,12 +46,34 @@ async function load(url: string, edit: Edit): Promise<autocannon.Result> {
   });
 }
 
-function describe(label: string, r: autocannon.Result): string {
+/** CPU time of a process so far (user + system, all threads), ms; null where /proc is missing. */
+function processCpu_ms(pid: number): number | null {
+  try {
+    // Fields after the command name (which may hold spaces): state is field 3, utime 14, stime 15.
+    const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+    const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+    const ticksPerSecond = 100; // USER_HZ on Linux
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / ticksPerSecond;
+  } catch {
+    return null;
+  }
+}
+
+/** Runs one load and measures the server's CPU time over it. */
+async function measured(pid: number, url: string, edit: Edit): Promise<{ result: autocannon.Result; cpu_ms: number | null }> {
+  const before = processCpu_ms(pid);
+  const result = await load(url, edit);
+  const after = processCpu_ms(pid);
+  return { result, cpu_ms: before === null || after === null ? null : after - before };
+}
+
+function describe(label: string, { result: r, cpu_ms }: { result: autocannon.Result; cpu_ms: number | null }): string {
   const errors = r.errors + r.timeouts + r.non2xx;
   const ok = r.latency.p99 <= GOAL_P99_MS && errors === 0;
+  const cpu = cpu_ms === null || r.requests.total === 0 ? '' : `, server CPU ${(cpu_ms / r.requests.total).toFixed(1)} ms per request`;
   return (
     `server: ${label}: ${r.requests.total} requests in ${DURATION_S} s (${r.requests.average.toFixed(1)}/s), latency p50 ${r.latency.p50} ms, ` +
-    `p99 ${r.latency.p99} ms, max ${r.latency.max} ms, errors ${errors} — goal p99 ≤ ${GOAL_P99_MS} ms, 0 errors: ${ok ? 'met' : 'NOT met'}`
+    `p99 ${r.latency.p99} ms, max ${r.latency.max} ms, errors ${errors}${cpu} — goal p99 ≤ ${GOAL_P99_MS} ms, 0 errors: ${ok ? 'met' : 'NOT met'}`
   );
 }
 
@@ -72,12 +97,13 @@ export async function benchServer(): Promise<string[]> {
   try {
     // One untimed request warms the JIT and the medium cache.
     await fetch(`${url}${BENCH_ROUTE}`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ scenario: profileFile('cold-channel-morning') }) });
-    const eye = await load(url, (s, i) => (s.observer.height_m = 4 + 0.125 * i));
-    const air = await load(url, (s, i) => (s.atmosphere.profile[0].temperature_C = 1 + 0.03125 * i));
+    const eye = await measured(child.pid!, url, (s, i) => (s.observer.height_m = 4 + 0.125 * i));
+    const air = await measured(child.pid!, url, (s, i) => (s.atmosphere.profile[0].temperature_C = 1 + 0.03125 * i));
     return [
       `server: POST ${BENCH_ROUTE}, built-in scenario, ${CONNECTIONS} connections, server in its own process (${availableParallelism()} cores, load average ${startLoad.toFixed(1)} at the start)`,
       describe('varied eye height (shared air)', eye),
       describe('varied surface temperature (air rebuilt)', air),
+      `server: load average ${loadavg()[0].toFixed(1)} at the end`,
     ];
   } finally {
     child.kill('SIGTERM');

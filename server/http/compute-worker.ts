@@ -3,7 +3,8 @@
  * (started with `--import tsx`, so this file stays TypeScript) or in the main thread when the app
  * has no pool. Requests arrive validated (server/http/validate.ts); this calls the same service
  * functions as the CLI and returns the result as JSON text (serialised here, off the main thread),
- * or the input problems by field. Each thread keeps its own cache of built media.
+ * or the input problems by field. Each thread keeps its own cache of built media (the scenarios'
+ * and their US 1976 references').
  */
 import { findings } from '../service/findings.js';
 import { profileLevels } from '../service/profile.js';
@@ -64,7 +65,7 @@ function run(task: ComputeTask): unknown {
       return { ...traceRays(scenario, elevations, { path_points: task.path_points, max_steps: task.max_steps, medium }), fan };
     }
     case 'findings':
-      return findings(scenario, { ...task.options, medium });
+      return findings(scenario, { ...task.options, medium, media });
     case 'view':
       return viewFinding(scenario, { ...task.options, medium });
   }

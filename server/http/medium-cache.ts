@@ -1,7 +1,8 @@
 /**
  * A small cache of built media, so the requests one viewer edit makes (air, trace, findings, view)
  * build the medium of a scenario once. Keyed by the scenario's atmosphere and optics (all that
- * buildMedium reads); least recently used entries go first. Media are read-only once built.
+ * buildMedium reads); least recently used entries go first. Media are read-only once built. Also
+ * the source of the US 1976 reference media of findings (server/service/reference-media.ts).
  */
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import type { Scenario } from '../../sim/scenario.js';

@@ -2,13 +2,15 @@
  * All findings of a scenario in one: horizon, transfer curve with images and hidden bands,
  * looming and towering, visibility with resolvability, and astronomical refraction (the main
  * job's output). The transfer curves are computed once and shared by the transfer and visibility
- * parts. Used by the CLI `findings` command and the HTTP API; the readable text is
+ * parts; the reference media (straight lines, US 1976) are made once and shared by the transfer,
+ * visibility and horizon parts. Used by the CLI `findings` command and the HTTP API; the readable text is
  * findingsText (./findings-text.ts).
  */
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import type { Scenario } from '../../sim/scenario.js';
 import { SAFETY_CAUTION } from '../cli/commands/shared.js';
 import { horizonFinding, type HorizonJson } from './horizon.js';
+import { referenceMedia, type MediumSource } from './reference-media.js';
 import { refractionFinding, type RefractionJson } from './refraction.js';
 import { sightCurves } from './sight.js';
 import { transferJson, type TransferJson } from './transfer.js';
@@ -27,6 +29,8 @@ export interface FindingsOptions {
   /** Rays of the transfer curve's first fan. */
   rays?: number;
   medium?: Medium;
+  /** Where the US 1976 reference medium comes from (a cache in the HTTP workers). Default: built. */
+  media?: MediumSource;
 }
 
 /** The findings JSON. */
@@ -51,19 +55,22 @@ export interface FindingsJson {
 /**
  * Computes every finding of a scenario.
  * @param scenario the SI scenario.
- * @param options range and height overrides, refraction elevations, bodies, rays, a prebuilt medium.
+ * @param options range and height overrides, refraction elevations, bodies, rays, a prebuilt
+ *   medium, a source of the US 1976 reference medium.
  * @returns the findings JSON (each part as its own command's JSON).
  * @throws InputRangeError naming the field for bad input.
  */
 export function findings(scenario: Scenario, options: FindingsOptions = {}): FindingsJson {
   const medium = options.medium ?? buildMedium(scenario);
+  const references = referenceMedia(scenario, medium, options.media);
   const curves = sightCurves(scenario, {
     medium,
+    referenceMedia: references,
     ...(options.range_m !== undefined ? { range_m: options.range_m } : {}),
     ...(options.max_height_m !== undefined ? { max_height_m: options.max_height_m } : {}),
     ...(options.rays !== undefined ? { rays: options.rays } : {}),
   });
-  const horizon = horizonFinding(scenario, { medium });
+  const horizon = horizonFinding(scenario, { medium, referenceMedia: references });
   const refraction = refractionFinding(scenario, {
     medium,
     ...(options.refraction_elevations_deg !== undefined ? { elevations_deg: options.refraction_elevations_deg } : {}),

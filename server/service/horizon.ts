@@ -7,11 +7,11 @@
  */
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import { horizon, type HorizonFinding } from '../../sim/analysis/dip.js';
-import { referenceScenario } from '../../sim/analysis/reference.js';
 import type { Scenario } from '../../sim/scenario.js';
 import type { Fate } from '../../sim/trace/kernel.js';
 import { traceRay } from '../../sim/trace/ray.js';
 import { arcmin, deg } from './angles.js';
+import { referenceMedia, standardWarning, type MediumSource, type ReferenceMedia } from './reference-media.js';
 
 /**
  * Offset of the two confirming rays from the horizon, rad (2″): far above the tracer's error in
@@ -54,12 +54,13 @@ export interface HorizonJson {
 /**
  * The apparent horizon of a scenario's observer.
  * @param scenario the SI scenario.
- * @param options a prebuilt medium.
+ * @param options a prebuilt medium; the reference media (./reference-media.ts) or a source of
+ *   the US 1976 medium (default: built here).
  * @returns the `horizon` JSON (angles in degrees / arcminutes).
  * @throws InputRangeError naming the field for bad input.
  * Reference: DESIGN.md §3 items 2–3; REFERENCES.md §5.3.
  */
-export function horizonFinding(scenario: Scenario, options: { medium?: Medium } = {}): HorizonJson {
+export function horizonFinding(scenario: Scenario, options: { medium?: Medium; referenceMedia?: ReferenceMedia; media?: MediumSource } = {}): HorizonJson {
   const medium = options.medium ?? buildMedium(scenario);
   const h = scenario.observer.height_m;
   const R = scenario.earth.radius_m;
@@ -71,13 +72,15 @@ export function horizonFinding(scenario: Scenario, options: { medium?: Medium } 
   const geometricDip = Math.acos(R / (R + h));
   let standard: HorizonJson['standard'] = null;
   const warnings = [...medium.warnings, ...found.warnings];
-  try {
-    const s = horizon(buildMedium(referenceScenario(scenario, medium.column, 'standard')).table, h, R);
-    standard = { horizon_elevation_deg: deg(s.horizon_elevation_rad), dip_arcmin: arcmin(s.dip_rad), horizon_distance_m: s.horizon_distance_m };
-  } catch (error) {
-    if (!(error instanceof RangeError)) throw error;
-    warnings.push(`no US 1976 reference for this surface air: ${error.message}`);
-  }
+  const references = options.referenceMedia ?? referenceMedia(scenario, medium, options.media);
+  if (references.standard) {
+    try {
+      const s = horizon(references.standard.table, h, R);
+      standard = { horizon_elevation_deg: deg(s.horizon_elevation_rad), dip_arcmin: arcmin(s.dip_rad), horizon_distance_m: s.horizon_distance_m };
+    } catch (error) {
+      warnings.push(standardWarning(error));
+    }
+  } else if (references.standardWarning) warnings.push(references.standardWarning);
   return {
     scenario: scenario.name,
     observer_height_m: h,

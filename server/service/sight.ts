@@ -5,9 +5,9 @@
  */
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import { InputRangeError, requireInRange } from '../../sim/errors.js';
-import { referenceScenario } from '../../sim/analysis/reference.js';
 import { transferCurve, type TransferCurve } from '../../sim/analysis/transfer.js';
 import type { Scenario } from '../../sim/scenario.js';
+import { referenceMedia, standardWarning, type MediumSource, type ReferenceMedia } from './reference-media.js';
 
 /** Options of sightCurves. */
 export interface SightOptions {
@@ -21,6 +21,10 @@ export interface SightOptions {
   rays?: number;
   /** Also compute the two reference curves. Default true. */
   references?: boolean;
+  /** The reference media, if already made (saves making them again; ./reference-media.ts). */
+  referenceMedia?: ReferenceMedia;
+  /** Where the US 1976 reference medium comes from when referenceMedia is not given. Default: built. */
+  media?: MediumSource;
 }
 
 /** The curves of one scenario at one range. */
@@ -66,13 +70,15 @@ export function sightCurves(scenario: Scenario, options: SightOptions = {}): Sig
   let standard: TransferCurve | null = null;
   let geometry: TransferCurve | null = null;
   if (options.references ?? true) {
-    geometry = curve(buildMedium(referenceScenario(scenario, medium.column, 'geometry')));
-    try {
-      standard = curve(buildMedium(referenceScenario(scenario, medium.column, 'standard')));
-    } catch (error) {
-      if (!(error instanceof RangeError)) throw error;
-      warnings.push(`no US 1976 reference for this surface air: ${error.message}`);
-    }
+    const references = options.referenceMedia ?? referenceMedia(scenario, medium, options.media);
+    geometry = curve(references.geometry);
+    if (references.standard) {
+      try {
+        standard = curve(references.standard);
+      } catch (error) {
+        warnings.push(standardWarning(error));
+      }
+    } else if (references.standardWarning) warnings.push(references.standardWarning);
   }
   return { scenario, medium, range_m, max_height_m, actual, standard, geometry, warnings };
 }
