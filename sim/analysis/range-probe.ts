@@ -5,7 +5,8 @@
  */
 import type { IndexTable } from '../refractivity/index-table.js';
 import { FATES, FATE_TARGET, RayKernel, type Fate } from '../trace/kernel.js';
-import { requireElevation, requireObserverHeight, resolveTraceOptions } from '../trace/options.js';
+import { requireElevation, requireObserverHeight, resolveTraceOptions, type TraceSettings } from '../trace/options.js';
+import { straightRayEnd } from './sight-geometry.js';
 
 /** Where one ray from the observer ends when traced toward the target range. */
 export interface RangeSample {
@@ -38,7 +39,9 @@ export const FINE_PROBE_TOLERANCE_M = 1e-9;
  * Traces rays from one observer to one range through one medium. One ray kernel per tolerance
  * serves every ray (sim/trace/kernel.ts: the integrator, knot store and levels are built once);
  * a kernel keeps no state from one ray to the next, so each ray is traced exactly as traceRay
- * would trace it alone.
+ * would trace it alone. In a medium without refraction (n ≡ 1: the pure-geometry reference, index
+ * model 'none') rays are straight lines and their ends are computed in closed form
+ * (straightRayEnd, sight-geometry.ts), exact where the tracer is good to about 1e-9 m.
  */
 export class RangeProbe {
   readonly table: IndexTable;
@@ -47,9 +50,12 @@ export class RangeProbe {
   readonly earthRadius_m: number;
   /** Rays traced so far. */
   count = 0;
+  /** True when n ≡ 1 throughout the table: straight rays, no tracing. */
+  readonly straight: boolean;
   /** Kernels of the ordinary and the fine tolerance, built at their first ray. */
   private ordinary: RayKernel | null = null;
   private fine: RayKernel | null = null;
+  private straightChecked = false;
 
   /**
    * @param table the medium n(z).
@@ -62,6 +68,7 @@ export class RangeProbe {
     this.observerHeight_m = observerHeight_m;
     this.range_m = range_m;
     this.earthRadius_m = earthRadius_m;
+    this.straight = isVacuum(table);
   }
 
   /**
@@ -71,6 +78,7 @@ export class RangeProbe {
    */
   probe(elevation_rad: number, fine = false): RangeSample {
     this.count++;
+    if (this.straight) return this.straightProbe(elevation_rad);
     const kernel = fine ? (this.fine ??= this.kernel(FINE_PROBE_TOLERANCE_M)) : (this.ordinary ??= this.kernel(PROBE_TOLERANCE_M));
     requireElevation('elevation_rad', elevation_rad);
     kernel.trace(this.observerHeight_m, elevation_rad, false);
@@ -84,8 +92,30 @@ export class RangeProbe {
     };
   }
 
-  /** A kernel to the target range with the given tolerance (validates as traceRay does: InputRangeError). */
+  /** The closed-form end of a straight ray (validated as a traced one). */
+  private straightProbe(elevation_rad: number): RangeSample {
+    if (!this.straightChecked) {
+      this.settings(PROBE_TOLERANCE_M);
+      this.straightChecked = true;
+    }
+    requireElevation('elevation_rad', elevation_rad);
+    const end = straightRayEnd(this.observerHeight_m, elevation_rad, this.range_m, this.earthRadius_m, this.table.top_m);
+    return {
+      elevation_rad,
+      fate: end.fate,
+      height_m: end.fate === 'target' ? Math.max(0, end.endHeight_m) : null,
+      endRange_m: end.endRange_m,
+      endElevation_rad: end.endElevation_rad,
+    };
+  }
+
+  /** A kernel to the target range with the given tolerance. */
   private kernel(tolerance_m: number): RayKernel {
+    return new RayKernel(this.table, this.settings(tolerance_m));
+  }
+
+  /** Trace settings to the target range, validated as traceRay validates them (InputRangeError). */
+  private settings(tolerance_m: number): TraceSettings {
     const settings = resolveTraceOptions(this.table, {
       earthRadius_m: this.earthRadius_m,
       stopRange_m: this.range_m,
@@ -93,6 +123,12 @@ export class RangeProbe {
       tolerance_m,
     });
     requireObserverHeight(this.observerHeight_m, settings);
-    return new RayKernel(this.table, settings);
+    return settings;
   }
+}
+
+/** True when a table has n − 1 = 0 and dn/dz = 0 everywhere (n ≡ 1). */
+export function isVacuum(table: IndexTable): boolean {
+  const zero = (a: Float64Array): boolean => a.every((v) => v === 0);
+  return zero(table.nm1) && zero(table.dndz_bottom) && zero(table.dndz_top);
 }
