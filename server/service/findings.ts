@@ -3,10 +3,11 @@
  * looming and towering, visibility with resolvability, and astronomical refraction (the main
  * job's output). The transfer curves are computed once and shared by the transfer and visibility
  * parts; the reference media (straight lines, US 1976) are made once and shared by the transfer,
- * visibility and horizon parts. Used by the CLI `findings` command and the HTTP API; the readable text is
+ * visibility and horizon parts, and the apparent horizon by the horizon and refraction parts. Used by the CLI `findings` command and the HTTP API; the readable text is
  * findingsText (./findings-text.ts).
  */
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
+import { horizon as apparentHorizon } from '../../sim/analysis/dip.js';
 import type { Scenario } from '../../sim/scenario.js';
 import { SAFETY_CAUTION } from '../cli/commands/shared.js';
 import { horizonFinding, type HorizonJson } from './horizon.js';
@@ -70,9 +71,11 @@ export function findings(scenario: Scenario, options: FindingsOptions = {}): Fin
     ...(options.max_height_m !== undefined ? { max_height_m: options.max_height_m } : {}),
     ...(options.rays !== undefined ? { rays: options.rays } : {}),
   });
-  const horizon = horizonFinding(scenario, { medium, referenceMedia: references });
+  const found = apparentHorizon(medium.table, scenario.observer.height_m, scenario.earth.radius_m);
+  const horizon = horizonFinding(scenario, { medium, horizon: found, referenceMedia: references });
   const refraction = refractionFinding(scenario, {
     medium,
+    horizon: found,
     ...(options.refraction_elevations_deg !== undefined ? { elevations_deg: options.refraction_elevations_deg } : {}),
     ...(options.bodies_deg !== undefined ? { bodies_deg: options.bodies_deg } : {}),
   });

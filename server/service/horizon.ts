@@ -54,17 +54,21 @@ export interface HorizonJson {
 /**
  * The apparent horizon of a scenario's observer.
  * @param scenario the SI scenario.
- * @param options a prebuilt medium; the reference media (./reference-media.ts) or a source of
- *   the US 1976 medium (default: built here).
+ * @param options a prebuilt medium; its horizon for this observer (sim/analysis/dip.ts) if
+ *   already found; the reference media (./reference-media.ts) or a source of the US 1976 medium
+ *   (default: built here).
  * @returns the `horizon` JSON (angles in degrees / arcminutes).
  * @throws InputRangeError naming the field for bad input.
  * Reference: DESIGN.md §3 items 2–3; REFERENCES.md §5.3.
  */
-export function horizonFinding(scenario: Scenario, options: { medium?: Medium; referenceMedia?: ReferenceMedia; media?: MediumSource } = {}): HorizonJson {
+export function horizonFinding(
+  scenario: Scenario,
+  options: { medium?: Medium; horizon?: HorizonFinding; referenceMedia?: ReferenceMedia; media?: MediumSource } = {},
+): HorizonJson {
   const medium = options.medium ?? buildMedium(scenario);
   const h = scenario.observer.height_m;
   const R = scenario.earth.radius_m;
-  const found = horizon(medium.table, h, R);
+  const found = options.horizon ?? horizon(medium.table, h, R);
   const trace = (elevation: number): Fate =>
     traceRay(medium.table, h, elevation, { earthRadius_m: R, maxRange_m: HORIZON_CHECK_RANGE_M }).fate;
   const below = trace(found.horizon_elevation_rad - HORIZON_CHECK_OFFSET_RAD);

@@ -5,8 +5,9 @@
  * `refraction` command, `findings` and the HTTP API.
  */
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
-import { astronomicalRefraction_rad, bodyAppearance } from '../../sim/analysis/astronomical.js';
-import { horizon } from '../../sim/analysis/dip.js';
+import { bodyAppearance, refractionOfProfile } from '../../sim/analysis/astronomical.js';
+import { horizon, type HorizonFinding } from '../../sim/analysis/dip.js';
+import { InvariantProfile } from '../../sim/analysis/invariant.js';
 import { InputRangeError } from '../../sim/errors.js';
 import { RAD_PER_DEG } from '../../sim/constants.js';
 import type { Scenario } from '../../sim/scenario.js';
@@ -58,14 +59,16 @@ export interface RefractionOptions {
   /** True elevations of bodies (0.53° discs), degrees (−90..90). Default none. */
   bodies_deg?: readonly number[];
   medium?: Medium;
+  /** The apparent horizon of this medium and observer (sim/analysis/dip.ts), if already found. */
+  horizon?: HorizonFinding;
 }
 
 /**
  * Astronomical refraction for the scenario's observer.
  * @param scenario the SI scenario.
- * @param options elevations, bodies, a prebuilt medium.
+ * @param options elevations, bodies, a prebuilt medium, its horizon for this observer.
  * @returns the `refraction` JSON.
- * @throws InputRangeError naming elevations_deg[i] or bodies_deg[i].
+ * @throws InputRangeError naming elevations_deg[i], bodies_deg[i], observerHeight_m or earthRadius_m.
  * Reference: sim/analysis/astronomical.ts (Auer & Standish 2000).
  */
 export function refractionFinding(scenario: Scenario, options: RefractionOptions = {}): RefractionJson {
@@ -74,12 +77,15 @@ export function refractionFinding(scenario: Scenario, options: RefractionOptions
   const medium = options.medium ?? buildMedium(scenario);
   const h = scenario.observer.height_m;
   const R = scenario.earth.radius_m;
+  // horizon() checks h (0..table top) and R as astronomicalRefraction_rad would; one invariant
+  // profile then serves every row (refractionOfProfile is that function's kernel).
+  const horizonElevation = (options.horizon ?? horizon(medium.table, h, R)).horizon_elevation_rad;
+  const profile = elevations.length > 0 ? new InvariantProfile(medium.table, R) : null;
   const rows = elevations.map((e): RefractionRow => {
-    const r = astronomicalRefraction_rad(medium.table, h, e * RAD_PER_DEG, R);
+    const r = refractionOfProfile(profile!, h, e * RAD_PER_DEG);
     return { apparent_elevation_deg: e, refraction_arcmin: r === null ? null : arcmin(r), true_elevation_deg: r === null ? null : e - deg(r) };
   });
   const seen = bodies.length > 0 ? bodyAppearance(medium.table, h, bodies.map((b) => ({ true_elevation_rad: b * RAD_PER_DEG })), R) : [];
-  const horizonElevation = horizon(medium.table, h, R).horizon_elevation_rad;
   return {
     scenario: scenario.name,
     observer_height_m: h,
