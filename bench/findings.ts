@@ -9,7 +9,8 @@
  * the machine changes it far less than wall time; both are printed with the load average.
  * With `--snapshot FILE` the findings JSON of every profile (shared-air case, first eye height)
  * is written to FILE, to compare the results of two versions (`--compare FILE` prints the largest
- * differences of every number against a saved snapshot).
+ * differences of every number against a saved snapshot, leaving out the transfer curve's list of
+ * rays, which samples the curve and changes with the fan's settings).
  *
  *   node --import tsx bench/findings.ts [--snapshot FILE | --compare FILE] [--runs N]
  */
@@ -72,6 +73,8 @@ function time(runs: number, f: (i: number) => void): { cpu: number; wall: number
 
 /** Largest absolute difference per JSON path pattern between two values (numbers only; other changes listed). */
 function differences(a: unknown, b: unknown, path: string, out: Map<string, number>, changed: string[]): void {
+  // The fan's own rays (their number and elevations) are how the curve was sampled, not a result.
+  if (/^\.transfer\.rays(\[|_traced|$)/.test(path)) return;
   const key = path.replace(/\[\d+\]/g, '[]');
   if (typeof a === 'number' && typeof b === 'number') {
     const d = Math.abs(a - b);

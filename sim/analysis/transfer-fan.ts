@@ -10,7 +10,13 @@ import type { ElevationWindow } from './transfer-window.js';
 
 /** Options of the fan (defaults in FAN_DEFAULTS). */
 export interface FanOptions {
-  /** Rays of the first, uniform fan over the window. Default 241. */
+  /**
+   * Rays of the first, uniform fan over the window. Default 121: the refinement below adds rays
+   * wherever the height steps, bends or fates demand (measured over the eight scenarios of
+   * profiles/ and their US 1976 references: 241, 121, 61 and 31 first rays give the same images,
+   * folds and hidden bands, image ends within 7e-8°, while 121 traces 10–45 % fewer rays than 241,
+   * mostly rays that meet the sea below the window's useful part).
+   */
   rays?: number;
   /**
    * Largest height step between neighbouring rays below the maximum height, m. Default null:
@@ -27,7 +33,7 @@ export interface FanOptions {
 
 /** Defaults of FanOptions (repeated in each option's doc comment). */
 export const FAN_DEFAULTS = Object.freeze({
-  rays: 241,
+  rays: 121,
   heightStep_m: null as number | null,
   minSpacing_rad: 1e-5 * RAD_PER_DEG,
   boundaryTolerance_rad: 1e-12,

@@ -1,5 +1,6 @@
 /** The options the sight-line commands share: --range, --max-height, --rays (parsed with field-named errors). */
 import type { Command } from 'commander';
+import { FAN_DEFAULTS } from '../../../sim/analysis/transfer-fan.js';
 import { InputRangeError } from '../../../sim/errors.js';
 import { SIGHT_LIMITS, type SightOptions } from '../../service/sight.js';
 import { parseInteger, parseNumber } from '../parse.js';
@@ -15,7 +16,7 @@ export function addSightOptions(cmd: Command, maxHeightMeaning: string): Command
   return cmd
     .option('--range <m>', 'target range override, metres (default: the scenario target.range_m)')
     .option('--max-height <m>', `${maxHeightMeaning}, metres (default: the scenario target.height_m)`)
-    .option('--rays <n>', 'rays of the first fan before refinement (default 241)');
+    .option('--rays <n>', `rays of the first fan before refinement (default ${FAN_DEFAULTS.rays})`);
 }
 
 /** Parses the shared options into service options. */
