@@ -41,7 +41,7 @@ export function inventedWeek(rows = WEEK_ROWS): OutlookObservation[] {
 }
 
 async function timeRun(observations: OutlookObservation[], workers: number): Promise<{ seconds: number; fingerprint: string }> {
-  const { site } = siteFromText(await readFile(join(import.meta.dirname, '..', 'profiles', 'outlook-site-tarrowgale-head.json'), 'utf8'));
+  const { site } = siteFromText(await readFile(join(import.meta.dirname, '..', 'profiles', 'outlook', 'site-tarrowgale-head.json'), 'utf8'));
   const start = performance.now();
   const findings = await computeFindings(observations, site, { workers });
   const seconds = (performance.now() - start) / 1000;

@@ -28,8 +28,8 @@ export const OUTLOOK_HTTP_LIMITS = Object.freeze({
 
 /** The demo of profiles/ (README): an invented site and an invented two-day series. */
 export const OUTLOOK_DEMO = Object.freeze({
-  site: join(REPO_ROOT, 'profiles', 'outlook-site-tarrowgale-head.json'),
-  series: join(REPO_ROOT, 'profiles', 'outlook-tarrowgale-two-days.csv'),
+  site: join(REPO_ROOT, 'profiles', 'outlook', 'site-tarrowgale-head.json'),
+  series: join(REPO_ROOT, 'profiles', 'outlook', 'tarrowgale-two-days.csv'),
 });
 
 const outlookRequest = z.strictObject({

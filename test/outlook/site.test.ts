@@ -5,7 +5,7 @@ import { radiusOfCurvature_m } from '../../sim/earth.js';
 import { SiteError } from '../../server/outlook/errors.js';
 import { loadSiteFile, siteFromText, SITE_DEFAULTS } from '../../server/outlook/site.js';
 
-const DEMO_SITE = join(import.meta.dirname, '..', '..', 'profiles', 'outlook-site-tarrowgale-head.json');
+const DEMO_SITE = join(import.meta.dirname, '..', '..', 'profiles', 'outlook', 'site-tarrowgale-head.json');
 
 const MINIMAL = {
   name: 'Test pier (invented)',
