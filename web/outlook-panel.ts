@@ -60,6 +60,8 @@ export function mountOutlookPanel(container: HTMLElement): void {
   const status = element('p', { class: 'description', role: 'status', 'aria-live': 'polite' }, 'An hour-by-hour outlook from air and sea temperature, wind, humidity and pressure: the demo uses an invented site and two invented days.');
   const plot = element('div', { class: 'plot', id: 'plot-outlook', style: `height: ${PANEL_HEIGHT_PX}px` });
   const caution = element('p', { class: 'description' });
+  // The chart takes its space only once there is an outlook to draw.
+  plot.hidden = true;
   panel.append(head, status, plot, caution);
   container.append(panel);
 
@@ -69,6 +71,7 @@ export function mountOutlookPanel(container: HTMLElement): void {
     try {
       const body = await load();
       const result = await requestJson<OutlookAnswer>('/api/outlook', { ...body, skip_bad_rows: true });
+      plot.hidden = false;
       await Plotly.react(plot, ...figureParts(result));
       const skipped = result.skipped_rows.length;
       status.textContent = `${result.rows.length} rows for ${result.site.name}${skipped > 0 ? `; ${skipped} bad value${skipped > 1 ? 's' : ''} left out` : ''}. Shifts against the US 1976 atmosphere; positive: seen higher.`;
