@@ -9,9 +9,11 @@ import { Piscina } from 'piscina';
 import compute, { type ComputeAnswer, type ComputeTask } from './compute-worker.js';
 import { HttpError } from './errors.js';
 
-/** The worker module as piscina loads it: compute-worker.ts under the tsx loader. */
-const WORKER_URL = new URL('./compute-worker.ts', import.meta.url).href;
-const TSX_LOADER = import.meta.resolve('tsx');
+/**
+ * The worker module as piscina loads it: a plain JavaScript entry that imports compute-worker.ts
+ * as ES modules through tsx's ESM API (see compute-worker-entry.mjs for why not `--import tsx`).
+ */
+const WORKER_URL = new URL('./compute-worker-entry.mjs', import.meta.url).href;
 /** Idle worker threads above minThreads end after this long, ms (all threads are kept: minThreads = workers). */
 const IDLE_TIMEOUT_MS = 10 * 60_000;
 
@@ -43,7 +45,7 @@ export function createComputePool(workers: number, timeout_ms: number): ComputeP
   }
   const pool = new Piscina<ComputeTask, ComputeAnswer>({
     filename: WORKER_URL,
-    execArgv: ['--import', TSX_LOADER],
+    execArgv: [],
     minThreads: workers,
     maxThreads: workers,
     idleTimeout: IDLE_TIMEOUT_MS,
