@@ -6,7 +6,7 @@ import { RAD_PER_DEG } from '../../sim/constants.js';
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import { InputRangeError } from '../../sim/errors.js';
 import type { Scenario } from '../../sim/scenario.js';
-import { traceRay } from '../../sim/trace/ray.js';
+import { rayTracer, type RayResult } from '../../sim/trace/ray.js';
 import { MAX_ELEVATION_RAD } from '../../sim/trace/options.js';
 import { RangeProbe } from '../../sim/analysis/range-probe.js';
 import { transferWindow } from '../../sim/analysis/transfer-window.js';
@@ -108,8 +108,11 @@ export function traceRays(scenario: Scenario, elevations_deg: readonly number[],
   };
   const fates: TraceResult['fates'] = { target: 0, surface: 0, escaped: 0, trapped: 0 };
   const rayWarnings = new Set<string>();
+  // One kernel for every ray, made at the first (so an empty list checks nothing, as before).
+  let trace: ((elevation_rad: number) => RayResult) | null = null;
   const rays = elevations_deg.map((elevation_deg): TracedRay => {
-    const ray = traceRay(medium.table, scenario.observer.height_m, elevation_deg * RAD_PER_DEG, traceOptions);
+    trace ??= rayTracer(medium.table, scenario.observer.height_m, traceOptions);
+    const ray = trace(elevation_deg * RAD_PER_DEG);
     fates[ray.fate]++;
     for (const w of ray.warnings) rayWarnings.add(w.replace(/ at range [0-9.e+-]+ m$/, ''));
     const path: [number, number][] = [];

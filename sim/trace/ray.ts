@@ -72,12 +72,31 @@ export interface RayResult {
  * spherically stratified media, e.g. Born & Wolf, Principles of Optics, §3.2.2).
  */
 export function traceRay(table: IndexTable, observerHeight_m: number, elevation_rad: number, options: TraceOptions = {}): RayResult {
+  return rayTracer(table, observerHeight_m, options)(elevation_rad);
+}
+
+/**
+ * A tracer of many rays from one observer through one medium with one set of options: the options
+ * and the observer height are validated once and one kernel (integrator, knot store, levels)
+ * serves every ray. Each ray comes out exactly as traceRay would give it alone: the kernel keeps
+ * nothing from one ray to the next.
+ *
+ * @param table the medium n(z), read only.
+ * @param observerHeight_m observer height above the surface, m; 0 ≤ h < top_m.
+ * @param options see TraceOptions / DEFAULTS.
+ * @returns a function tracing the ray at an apparent elevation, rad (|α| ≤ 80°), to a RayResult.
+ * @throws InputRangeError naming the option or observerHeight_m (here), or elevation_rad (per ray).
+ * Reference: as traceRay.
+ */
+export function rayTracer(table: IndexTable, observerHeight_m: number, options: TraceOptions = {}): (elevation_rad: number) => RayResult {
   const settings = resolveTraceOptions(table, options);
   requireObserverHeight(observerHeight_m, settings);
-  requireElevation('elevation_rad', elevation_rad);
   const kernel = new RayKernel(table, settings);
-  kernel.trace(observerHeight_m, elevation_rad, settings.recordPath);
-  return kernelResult(kernel, elevation_rad, settings);
+  return (elevation_rad) => {
+    requireElevation('elevation_rad', elevation_rad);
+    kernel.trace(observerHeight_m, elevation_rad, settings.recordPath);
+    return kernelResult(kernel, elevation_rad, settings);
+  };
 }
 
 /** Builds the plain result of the kernel's last ray. */

@@ -4,7 +4,7 @@ import { vacuumTable } from '../../sim/refractivity/index-table.js';
 import type { IndexTable } from '../../sim/refractivity/index-table.js';
 import { RayEquations } from '../../sim/trace/equations.js';
 import { quadratureRange } from '../../sim/trace/quadrature.js';
-import { traceRay } from '../../sim/trace/ray.js';
+import { rayTracer, traceRay } from '../../sim/trace/ray.js';
 import type { TraceOptions } from '../../sim/trace/options.js';
 import { expectClose } from '../support/close.js';
 import { linearIndex, perfectDuct, standardLapse, strongInversion } from './media.js';
@@ -258,5 +258,30 @@ describe('traceRay input checks', () => {
 
   it('rejects near-vertical rays, which belong to the quadrature', () => {
     expect(() => traceRay(table, 10, 1.5)).toThrow(/elevation_rad = 1.5 is out of range: allowed .*80°/);
+  });
+});
+
+describe('rayTracer (one kernel for many rays)', () => {
+  it('gives every ray exactly as traceRay alone, path included, in any order', () => {
+    // The kernel keeps nothing from one ray to the next: bit-for-bit equality, not a tolerance.
+    const table = strongInversion();
+    const options: TraceOptions = { stopRange_m: 30_000, maxRange_m: 30_000, recordPath: true, pathSpacing_m: 1000 };
+    const trace = rayTracer(table, 10, options);
+    const elevations = [0.2, -0.5, 0, 0.05, -0.12, 0.2].map((d) => d * RAD_PER_DEG);
+    const fates = new Set<string>();
+    for (const e of elevations) {
+      const many = trace(e);
+      const alone = traceRay(table, 10, e, options);
+      expect(many).toEqual(alone);
+      fates.add(alone.fate);
+    }
+    expect(fates.size).toBeGreaterThan(1);
+  });
+
+  it('checks the options and the observer once, and each elevation, naming the field', () => {
+    const table = vacuumTable(10_000);
+    expect(() => rayTracer(table, 20_000)).toThrow(/observerHeight_m/);
+    expect(() => rayTracer(table, 10, { tolerance_m: 0 })).toThrow(/tolerance_m/);
+    expect(() => rayTracer(table, 10)(2)).toThrow(/elevation_rad/);
   });
 });
