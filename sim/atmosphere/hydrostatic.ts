@@ -104,9 +104,17 @@ export function hydrostaticPressure(temperature: HydrostaticInput, surface_press
     }
     return lo;
   };
+  // The last height asked for and its pressure: a column is asked for p, dp/dz and the vapour
+  // terms at one height in a row (sim/refractivity/build-table.ts), each needing the same
+  // 8-point integral; the answer is a pure function of z, so repeating it is exact.
+  let lastZ_m = Number.NaN;
+  let lastP_Pa = 0;
   const pressure_Pa = (z_m: number): number => {
+    if (z_m === lastZ_m) return lastP_Pa;
     const i = cell(z_m);
-    return Math.exp(lnp[i] - k * integral(nodes[i], z_m));
+    lastP_Pa = Math.exp(lnp[i] - k * integral(nodes[i], z_m));
+    lastZ_m = z_m;
+    return lastP_Pa;
   };
   return {
     pressure_Pa,

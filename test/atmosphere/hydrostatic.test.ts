@@ -1,4 +1,4 @@
-import { describe, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { HYDROSTATIC_K_PER_M, US1976_EARTH_RADIUS_M } from '../../sim/constants.js';
 import { hydrostaticPressure } from '../../sim/atmosphere/hydrostatic.js';
 import { profileTemperature, standardTemperature } from '../../sim/atmosphere/temperature-profile.js';
@@ -73,4 +73,17 @@ describe('hydrostatic pressure', () => {
     const fine = hydrostaticPressure(profile, 100_000, { refinements: [{ from_m: 0, to_m: 1, spacing_m: 0.001 }] });
     for (const z of [0.0005, 0.5, 10, 30_000]) expectClose(fine.pressure_Pa(z), coarse.pressure_Pa(z), { rel: PRESSURE_REL });
   });
+
+  it('gives each height the same pressure whatever was asked before it (the repeat of the last height is exact)', () => {
+    // A fresh column per height is the reference: asking in any order, with repeats, changes no bit.
+    const profile = profileTemperature([{ height_m: 0, temperature_K: 275 }, { height_m: 20, temperature_K: 285 }], { kind: 'us1976' });
+    const shared = hydrostaticPressure(profile, 101_325);
+    const heights = [5, 5, 19.5, 0, 0, 15_000, 5, 60_000, 60_000, 19.5, -0, 0];
+    for (const z of heights) {
+      const fresh = hydrostaticPressure(profile, 101_325);
+      expect(shared.pressure_Pa(z)).toBe(fresh.pressure_Pa(z));
+      expect(shared.pressureGradient_Pa_per_m(z)).toBe(fresh.pressureGradient_Pa_per_m(z));
+    }
+  });
 });
+
