@@ -1,9 +1,10 @@
 /**
  * `npm run bench`: every benchmark in one run, printing figures and ratios (never part of the tests).
- * Run one section with `npm run bench -- trace` (sections: trace, outlook, ensemble, server, viewer).
+ * Run one section with `npm run bench -- trace` (sections: trace, findings, outlook, ensemble, server, viewer).
  */
 import { cpus } from 'node:os';
 import { benchTrace } from './trace.js';
+import { benchFindings } from './findings.js';
 import { benchOutlook } from './outlook.js';
 import { benchEnsemble } from './ensemble.js';
 import { benchServer } from './server.js';
@@ -11,6 +12,7 @@ import { benchViewer } from './viewer.js';
 
 const SECTIONS: Record<string, () => Promise<string[]>> = {
   trace: benchTrace,
+  findings: () => benchFindings(),
   outlook: benchOutlook,
   ensemble: benchEnsemble,
   server: benchServer,
