@@ -31,4 +31,28 @@ describe('reference scenarios', () => {
     expect(ref.atmosphere).toBe(scenario.atmosphere);
     expect(scenario.optics.index_model).toBe('ciddor');
   });
+
+  it('run the US 1976 reference of marine observations through the observed air temperature, not the sea skin', () => {
+    const bulk: Scenario = {
+      ...scenario,
+      atmosphere: {
+        kind: 'bulk',
+        sea_temperature_K: 276.15,
+        air_temperature_K: 281.65,
+        air_temperature_height_m: 10,
+        wind_speed_m_s: 4,
+        wind_height_m: 10,
+        relative_humidity: 0.85,
+        surface_pressure_Pa: 102_100,
+        cool_skin: false,
+        nodes: [],
+        above: { kind: 'us1976' },
+      },
+    };
+    const ref = referenceScenario(bulk, buildMedium(bulk).column, 'standard');
+    const refColumn = buildMedium(ref).column;
+    // The reference passes through the observation: 8.5 °C at 10 m (and so 6.5 K/km × ~10 m warmer at the sea).
+    expect(refColumn.temperature_K(10)).toBeCloseTo(281.65, 9);
+    expect(refColumn.temperature_K(0) - 281.65).toBeCloseTo(0.065, 3);
+  });
 });
