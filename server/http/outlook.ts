@@ -9,7 +9,7 @@ import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { Router } from 'express';
 import * as z from 'zod';
-import { SAFETY_CAUTION } from '../cli/commands/shared.js';
+import { SAFETY_CAUTION } from '../service/caution.js';
 import { parseSeriesCsv } from '../outlook/csv.js';
 import { SeriesError } from '../outlook/errors.js';
 import { siteFromJson } from '../outlook/site.js';

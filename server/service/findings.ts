@@ -9,7 +9,7 @@
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import { horizon as apparentHorizon } from '../../sim/analysis/dip.js';
 import type { Scenario } from '../../sim/scenario.js';
-import { SAFETY_CAUTION } from '../cli/commands/shared.js';
+import { SAFETY_CAUTION } from './caution.js';
 import { horizonFinding, type HorizonJson } from './horizon.js';
 import { referenceMedia, type MediumSource } from './reference-media.js';
 import { refractionFinding, type RefractionJson } from './refraction.js';

@@ -8,7 +8,7 @@ import { sightingSweep, type SightingOptions, type SightingResult } from '../../
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import { InputRangeError } from '../../sim/errors.js';
 import type { Scenario } from '../../sim/scenario.js';
-import { SAFETY_CAUTION } from '../cli/commands/shared.js';
+import { SAFETY_CAUTION } from './caution.js';
 
 /** The sighting JSON. */
 export interface SightingJson extends SightingResult {

@@ -6,7 +6,7 @@
  */
 import { targetVisibility, visibilityVerdict, type VisibilityVerdict } from '../../sim/analysis/visibility.js';
 import type { Scenario } from '../../sim/scenario.js';
-import { SAFETY_CAUTION } from '../cli/commands/shared.js';
+import { SAFETY_CAUTION } from './caution.js';
 import { arcmin } from './angles.js';
 import { sightCurves, type SightCurves, type SightOptions } from './sight.js';
 import { imageJson, type ImageJson } from './transfer.js';

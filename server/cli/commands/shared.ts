@@ -9,9 +9,7 @@ export interface CommonOptions {
   json?: boolean;
 }
 
-export const SAFETY_CAUTION =
-  'Model estimate only: refraction near the sea surface changes by the minute and with the air you did not measure. ' +
-  'Defer to official observations, local regulations and licensed professionals for navigation and incident findings.';
+export { SAFETY_CAUTION } from '../../service/caution.js';
 
 /**
  * Adds a command taking a scenario file, with --json, and runs `compute` on the loaded scenario.
