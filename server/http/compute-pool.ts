@@ -6,14 +6,12 @@
  */
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
+import { tsWorkerOptions } from '../ts-worker.js';
 import compute, { type ComputeAnswer, type ComputeTask } from './compute-worker.js';
 import { HttpError } from './errors.js';
 
-/**
- * The worker module as piscina loads it: a plain JavaScript entry that imports compute-worker.ts
- * as ES modules through tsx's ESM API (see compute-worker-entry.mjs for why not `--import tsx`).
- */
-const WORKER_URL = new URL('./compute-worker-entry.mjs', import.meta.url).href;
+/** The worker module the pool's threads load (as ES modules, through server/ts-worker-entry.mjs). */
+const WORKER_URL = new URL('./compute-worker.ts', import.meta.url).href;
 /** Idle worker threads above minThreads end after this long, ms (all threads are kept: minThreads = workers). */
 const IDLE_TIMEOUT_MS = 10 * 60_000;
 
@@ -44,8 +42,7 @@ export function createComputePool(workers: number, timeout_ms: number): ComputeP
     return { workers, run: async (task) => compute(task), warm: async (task) => void compute(task), close: async () => {} };
   }
   const pool = new Piscina<ComputeTask, ComputeAnswer>({
-    filename: WORKER_URL,
-    execArgv: [],
+    ...tsWorkerOptions(WORKER_URL),
     minThreads: workers,
     maxThreads: workers,
     idleTimeout: IDLE_TIMEOUT_MS,

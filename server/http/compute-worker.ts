@@ -1,10 +1,10 @@
 /**
  * The computing half of the HTTP API: one task per request, run in a piscina worker thread
- * (started with `--import tsx`, so this file stays TypeScript) or in the main thread when the app
- * has no pool. Requests arrive validated (server/http/validate.ts); this calls the same service
- * functions as the CLI and returns the result as JSON text (serialised here, off the main thread),
- * or the input problems by field. Each thread keeps its own cache of built media (the scenarios'
- * and their US 1976 references').
+ * (loaded as ES modules through server/ts-worker-entry.mjs, so this file stays TypeScript) or in
+ * the main thread when the app has no pool. Requests arrive validated (server/http/validate.ts);
+ * this calls the same service functions as the CLI and returns the result as JSON text
+ * (serialised here, off the main thread), or the input problems by field. Each thread keeps its
+ * own cache of built media (the scenarios' and their US 1976 references').
  */
 import { findings } from '../service/findings.js';
 import { profileLevels } from '../service/profile.js';
