@@ -7,6 +7,7 @@ import { setMaxListeners } from 'node:events';
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
 import { InputRangeError } from '../../sim/errors.js';
+import { tsWorkerOptions } from '../ts-worker.js';
 import runMember, { type MemberResult, type MemberTask } from './worker.js';
 
 /** Most worker threads accepted. */
@@ -30,9 +31,8 @@ export interface PoolRun {
   workers: number;
 }
 
-/** The worker module as piscina loads it: this folder's worker.ts under the tsx loader. */
+/** The worker module the pool's threads load (as ES modules, through server/ts-worker-entry.mjs). */
 const WORKER_URL = new URL('./worker.ts', import.meta.url).href;
-const TSX_LOADER = import.meta.resolve('tsx');
 
 /** Default worker count: the cores Node reports. */
 export function defaultWorkers(): number {
@@ -63,8 +63,7 @@ export async function runMemberTasks(tasks: readonly MemberTask[], options: Pool
     return { results, cancelled: finished < tasks.length, workers };
   }
   const pool = new Piscina<MemberTask, MemberResult>({
-    filename: WORKER_URL,
-    execArgv: ['--import', TSX_LOADER],
+    ...tsWorkerOptions(WORKER_URL),
     minThreads: workers,
     maxThreads: workers,
     idleTimeout: 1000,

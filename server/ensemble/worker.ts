@@ -1,6 +1,7 @@
 /**
- * The ensemble worker: one member per task. Runs inside a piscina worker thread (started with
- * `--import tsx`, so this file stays TypeScript) or in the main thread when no pool is used.
+ * The ensemble worker: one member per task. Runs inside a piscina worker thread (loaded as ES
+ * modules through server/ts-worker-entry.mjs, so this file stays TypeScript) or in the main thread
+ * when no pool is used.
  */
 import { evaluateMember, type MemberOptions } from '../../sim/analysis/ensemble-member.js';
 import type { MemberFindings } from '../../sim/analysis/ensemble-summary.js';
