@@ -68,8 +68,15 @@ export async function runMemberTasks(tasks: readonly MemberTask[], options: Pool
     maxThreads: workers,
     idleTimeout: 1000,
   });
+  const controller = new AbortController();
+  // A member that finishes just as the run is stopped can post its result after piscina has ended
+  // its worker and dropped the task; piscina then emits 'error' ("Unexpected message from Worker"),
+  // which without a listener is an uncaught exception. After a stop such a late result is dropped;
+  // any other pool error is thrown as before.
+  pool.on('error', (error: unknown) => {
+    if (!controller.signal.aborted) throw error;
+  });
   try {
-    const controller = new AbortController();
     // piscina listens on the signal once per queued task.
     setMaxListeners(tasks.length + 10, controller.signal);
     const stop = () => controller.abort();
