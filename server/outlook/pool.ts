@@ -6,6 +6,7 @@ import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
 import { outlookForObservation, type OutlookFinding, type OutlookObservation, type OutlookSite } from '../../sim/analysis/outlook.js';
 import { InputError } from '../../sim/errors.js';
+import { tsWorkerOptions } from '../ts-worker.js';
 import type { OutlookTask } from './worker.js';
 
 /**
@@ -34,9 +35,8 @@ export function workerCount(workers: number | 'auto', rows: number): number {
   return Math.max(1, Math.min(workers, rows));
 }
 
-/** The worker module as piscina loads it, and the tsx loader it needs (a .ts file in a worker thread). */
+/** The worker module the pool's threads load (as ES modules, through server/ts-worker-entry.mjs). */
 const WORKER_URL = new URL('./worker.ts', import.meta.url).href;
-const TSX_LOADER = import.meta.resolve('tsx');
 
 /** Adds the row's label to an error, keeping input errors input errors (exit code 2). */
 function rowError(error: unknown, label: string): Error {
@@ -76,8 +76,7 @@ export async function computeFindings(observations: readonly OutlookObservation[
     return findings;
   }
   const pool = new Piscina<OutlookTask, OutlookFinding>({
-    filename: WORKER_URL,
-    execArgv: ['--import', TSX_LOADER],
+    ...tsWorkerOptions(WORKER_URL),
     minThreads: threads,
     maxThreads: threads,
   });

@@ -1,6 +1,7 @@
 /**
- * The outlook's pool worker (piscina): computes one row. Runs in a worker thread that loads
- * TypeScript through tsx (pool.ts passes `--import tsx`); pure computation, no I/O.
+ * The outlook's pool worker (piscina): computes one row. Runs in a worker thread that loads it as
+ * ES modules through tsx (server/ts-worker-entry.mjs, options from server/ts-worker.ts); pure
+ * computation, no I/O.
  */
 import { outlookForObservation, type OutlookFinding, type OutlookObservation, type OutlookSite } from '../../sim/analysis/outlook.js';
 
