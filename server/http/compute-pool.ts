@@ -47,6 +47,12 @@ export function createComputePool(workers: number, timeout_ms: number): ComputeP
     maxThreads: workers,
     idleTimeout: IDLE_TIMEOUT_MS,
   });
+  // A task whose time limit ran out just as its worker answered makes piscina emit 'error'
+  // ("Unexpected message from Worker") after the task is gone; unheard, that would be an uncaught
+  // exception that stops the server. No request is waiting for it, so it is logged and dropped.
+  pool.on('error', (error: unknown) => {
+    process.stderr.write(`loomline: compute pool: ${error instanceof Error ? error.message : String(error)} (ignored)\n`);
+  });
   let closing = false;
   return {
     workers,
