@@ -5,6 +5,7 @@
  * geometry and the US 1976 atmosphere. Shared by the CLI `horizon` command, `findings` and the
  * HTTP API.
  */
+import { geometricHorizon } from '../../sim/analysis/sight-geometry.js';
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import { horizon, type HorizonFinding } from '../../sim/analysis/dip.js';
 import type { Scenario } from '../../sim/scenario.js';
@@ -73,7 +74,7 @@ export function horizonFinding(
     traceRay(medium.table, h, elevation, { earthRadius_m: R, maxRange_m: HORIZON_CHECK_RANGE_M }).fate;
   const below = trace(found.horizon_elevation_rad - HORIZON_CHECK_OFFSET_RAD);
   const above = trace(found.horizon_elevation_rad + HORIZON_CHECK_OFFSET_RAD);
-  const geometricDip = Math.acos(R / (R + h));
+  const geometric = geometricHorizon(h, R);
   let standard: HorizonJson['standard'] = null;
   const warnings = [...medium.warnings, ...found.warnings];
   const references = options.referenceMedia ?? referenceMedia(scenario, medium, options.media);
@@ -96,7 +97,7 @@ export function horizonFinding(
     trapped_elevations: found.trapped ? { from_elevation_deg: deg(found.trapped.from_elevation_rad), to_elevation_deg: deg(found.trapped.to_elevation_rad) } : null,
     ducts: found.ducts.map((d) => ductJson(d, R)),
     trace_check: { below_fate: below, above_fate: above, confirmed: below === 'surface' && above !== 'surface' },
-    geometry: { dip_arcmin: arcmin(geometricDip), horizon_distance_m: R * geometricDip },
+    geometry: { dip_arcmin: arcmin(geometric.dip_rad), horizon_distance_m: geometric.horizon_distance_m },
     standard,
     warnings,
   };

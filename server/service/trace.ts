@@ -3,6 +3,7 @@
  * that builds that JSON, shared by the CLI `trace` command and the HTTP API (POST /api/trace).
  */
 import { RAD_PER_DEG } from '../../sim/constants.js';
+import { deg } from './angles.js';
 import { buildMedium, type Medium } from '../../sim/atmosphere/medium.js';
 import { InputRangeError } from '../../sim/errors.js';
 import type { Scenario } from '../../sim/scenario.js';
@@ -59,9 +60,6 @@ export const TRACE_DEFAULTS = Object.freeze({
 });
 
 /** Decimal places kept in paths: 0.1 m in range, 1 mm in height (well below what a plot shows). */
-/** Degrees per radian (the inverse of sim/constants RAD_PER_DEG). */
-const DEG_PER_RAD = 1 / RAD_PER_DEG;
-
 const RANGE_DECIMALS = 1;
 /** Lowest top of the automatic fan's frame, m (a target of height 0 still gets a view of the sea's edge). */
 const MIN_FAN_TOP_M = 1;
@@ -91,7 +89,7 @@ function round(value: number, decimals: number): number {
 export function traceRays(scenario: Scenario, elevations_deg: readonly number[], options: TraceRaysOptions = {}): TraceResult {
   const pathPoints = options.path_points ?? TRACE_DEFAULTS.path_points;
   if (!Number.isInteger(pathPoints) || pathPoints < 2 || pathPoints > 100_000) throw new InputRangeError('path_points', pathPoints, 'integers 2..100000');
-  const limit_deg = MAX_ELEVATION_RAD * DEG_PER_RAD;
+  const limit_deg = deg(MAX_ELEVATION_RAD);
   elevations_deg.forEach((e, i) => {
     if (typeof e !== 'number' || !Number.isFinite(e) || Math.abs(e) > limit_deg) throw new InputRangeError(`elevations_deg[${i}]`, e, `-${limit_deg}..${limit_deg} degrees`);
   });
@@ -163,5 +161,5 @@ export function fanElevations(from_deg: number, to_deg: number, count: number): 
 export function automaticFan(scenario: Scenario, medium: Medium = buildMedium(scenario)): { from_deg: number; to_deg: number } {
   const probe = new RangeProbe(medium.table, scenario.observer.height_m, scenario.target.range_m, scenario.earth.radius_m);
   const window = transferWindow(probe, TRACE_DEFAULTS.fan_top_factor * Math.max(scenario.target.height_m, MIN_FAN_TOP_M));
-  return { from_deg: window.from_rad * DEG_PER_RAD, to_deg: window.to_rad * DEG_PER_RAD };
+  return { from_deg: deg(window.from_rad), to_deg: deg(window.to_rad) };
 }

@@ -78,3 +78,15 @@ export function straightRayEnd(observerHeight_m: number, elevation_rad: number, 
   const height = (h * Math.cos(a) + 2 * R * Math.sin(a + 0.5 * theta) * Math.sin(0.5 * theta)) / Math.cos(end);
   return { fate: 'target', endRange_m: range_m, endHeight_m: height, endElevation_rad: end };
 }
+
+/**
+ * The sea horizon with straight lines of sight (n ≡ 1): dip = arccos(R/(R + h)) and the horizon
+ * distance along the surface R·dip (DESIGN.md §3 item 2; exact spherical geometry).
+ * @param observerHeight_m eye height above the surface, m (≥ 0).
+ * @param earthRadius_m Earth radius, m.
+ * @returns dip_rad (positive: below the horizontal) and horizon_distance_m.
+ */
+export function geometricHorizon(observerHeight_m: number, earthRadius_m: number): { dip_rad: number; horizon_distance_m: number } {
+  const dip_rad = Math.acos(earthRadius_m / (earthRadius_m + observerHeight_m));
+  return { dip_rad, horizon_distance_m: earthRadius_m * dip_rad };
+}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { geometricElevation_rad, straightRayEnd } from '../../sim/analysis/sight-geometry.js';
+import { geometricElevation_rad, geometricHorizon, straightRayEnd } from '../../sim/analysis/sight-geometry.js';
 import { vacuumTable } from '../../sim/refractivity/index-table.js';
 import { traceRay } from '../../sim/trace/ray.js';
 import { expectClose } from '../support/close.js';
@@ -88,5 +88,18 @@ describe('the closed-form end of a straight ray', () => {
       }
     }
     expect(count).toBe(4 * 3 * 41);
+  });
+});
+
+describe('the straight-line sea horizon', () => {
+  it('agrees with the tangent form tan(dip) = √((1 + x)² − 1), x = h/R, and distance R·dip', () => {
+    // Right triangle centre–eye–tangent point (exact geometry). Tolerance 1e-9 relative: arccos near
+    // 1 loses about 1e-16/dip² of relative precision (~2e-10 at 2 m).
+    for (const h of [2, 10, 100]) {
+      const x = h / R;
+      const { dip_rad, horizon_distance_m } = geometricHorizon(h, R);
+      expectClose(dip_rad, Math.atan(Math.sqrt(2 * x + x * x)), { rel: 1e-9 });
+      expectClose(horizon_distance_m, R * dip_rad, { rel: 1e-15 });
+    }
   });
 });
