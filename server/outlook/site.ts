@@ -18,7 +18,6 @@
  * with a latitude, the WGS 84 radius of curvature along the landmark's azimuth (0°, north, when
  * none is given); cool_skin false (the sea temperature is the skin temperature); 550 nm.
  */
-import { readFile } from 'node:fs/promises';
 import * as z from 'zod';
 import { EARTH_RADIUS_M, RAD_PER_DEG } from '../../sim/constants.js';
 import { radiusOfCurvature_m } from '../../sim/earth.js';
@@ -26,6 +25,7 @@ import type { OutlookSite } from '../../sim/analysis/outlook.js';
 import { describeIssues } from '../scenario/load.js';
 import { plainNumber } from '../scenario/schema.js';
 import { SiteError } from './errors.js';
+import { parseJsonText, readInputFile } from '../json-file.js';
 
 /** Defaults of the site file, in file units. */
 export const SITE_DEFAULTS = {
@@ -99,22 +99,11 @@ export function siteFromJson(value: unknown): { file: SiteFile; site: OutlookSit
 
 /** Parses site JSON text: the file as written and its SI form. Throws SiteError. */
 export function siteFromText(text: string, source = 'site file'): { file: SiteFile; site: OutlookSite } {
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch (error) {
-    throw new SiteError('site', `${source} is not valid JSON (${(error as Error).message})`);
-  }
-  return siteFromJson(value);
+  return siteFromJson(parseJsonText(text, source, (message) => new SiteError('site', message)));
 }
 
 /** Reads a site file from disk. Throws SiteError for an unreadable file or bad content. */
 export async function loadSiteFile(path: string): Promise<{ file: SiteFile; site: OutlookSite }> {
-  let text: string;
-  try {
-    text = await readFile(path, 'utf8');
-  } catch (error) {
-    throw new SiteError('--site', `cannot read site file ${path}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
-  }
+  const text = await readInputFile(path, 'site file', (message) => new SiteError('--site', message));
   return siteFromText(text, path);
 }

@@ -2,7 +2,7 @@
  * Parsing and loading scenario files: JSON text → validated file → SI scenario.
  * The only scenario entry point for the CLI, the HTTP server and the tests.
  */
-import { readFile } from 'node:fs/promises';
+import { parseJsonText, readInputFile } from '../json-file.js';
 import type * as z from 'zod';
 import type { Scenario } from '../../sim/scenario.js';
 import { convertScenario } from './convert.js';
@@ -43,22 +43,11 @@ export function scenarioFromJson(value: unknown): { file: ScenarioFile; scenario
 
 /** Parses scenario JSON text (with a clear message for malformed JSON). */
 export function scenarioFromText(text: string, source = 'scenario'): { file: ScenarioFile; scenario: Scenario } {
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch (error) {
-    throw new ScenarioError('', `${source} is not valid JSON (${(error as Error).message})`);
-  }
-  return scenarioFromJson(value);
+  return scenarioFromJson(parseJsonText(text, source, (message) => new ScenarioError('', message)));
 }
 
 /** Reads a scenario file from disk. Throws ScenarioError for unreadable files or bad content. */
 export async function loadScenarioFile(path: string): Promise<{ file: ScenarioFile; scenario: Scenario }> {
-  let text: string;
-  try {
-    text = await readFile(path, 'utf8');
-  } catch (error) {
-    throw new ScenarioError('', `cannot read scenario file ${path}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
-  }
+  const text = await readInputFile(path, 'scenario file', (message) => new ScenarioError('', message));
   return scenarioFromText(text, path);
 }
